@@ -1,0 +1,82 @@
+package coordination.core.curve;
+
+import java.util.List;
+
+/**
+ * Several stages acting together: the fastest operating stage wins, so the time is the minimum
+ * over the stages. All stages must be defined at every current (equation-based stages are).
+ */
+public final class FastestOfCurve implements TimeCurrentCurve {
+    private final TimeCurrentCurve[] stages;
+    private final String label;
+
+    /**
+     * Combines stages.
+     *
+     * @param label a name for messages
+     * @param stages one or more stages, each defined at every current from 0 A upwards
+     * @throws IllegalArgumentException if no stage is given or a stage has a limited domain
+     */
+    public FastestOfCurve(String label, List<? extends TimeCurrentCurve> stages) {
+        if (stages.isEmpty()) {
+            throw new IllegalArgumentException(label + ": stages: found none - must have at least one");
+        }
+        for (TimeCurrentCurve s : stages) {
+            if (s.lowestDefinedAmps() > 0 || s.highestDefinedAmps() < Double.POSITIVE_INFINITY) {
+                throw new IllegalArgumentException(label + ": stage " + s
+                        + " is defined only on part of the current axis - a combined stage must be defined everywhere");
+            }
+        }
+        this.stages = stages.toArray(new TimeCurrentCurve[0]);
+        this.label = label;
+    }
+
+    @Override
+    public double seconds(double amps) {
+        double t = Double.POSITIVE_INFINITY;
+        for (TimeCurrentCurve s : stages) {
+            t = Math.min(t, s.seconds(amps));
+        }
+        return t;
+    }
+
+    @Override
+    public double[] breakpointsAmps() {
+        double[][] parts = new double[stages.length + 1][];
+        for (int i = 0; i < stages.length; i++) {
+            parts[i] = stages[i].breakpointsAmps();
+        }
+        parts[stages.length] = handovers();
+        return Curves.union(parts);
+    }
+
+    // where an inverse stage becomes faster than a definite-time stage the minimum has a kink
+    private double[] handovers() {
+        double[] found = new double[stages.length * stages.length];
+        int n = 0;
+        for (TimeCurrentCurve a : stages) {
+            if (!(a instanceof InverseTimeStage inverse)) {
+                continue;
+            }
+            for (TimeCurrentCurve b : stages) {
+                if (b instanceof DefiniteTimeStage flat && flat.delaySeconds() > 0) {
+                    double amps = inverse.currentAtSeconds(flat.delaySeconds());
+                    if (amps > flat.pickupAmps()) {
+                        found[n++] = amps;
+                    }
+                }
+            }
+        }
+        return java.util.Arrays.copyOf(found, n);
+    }
+
+    /** @return the stages, in the order given */
+    public List<TimeCurrentCurve> stages() {
+        return List.of(stages);
+    }
+
+    @Override
+    public String toString() {
+        return label;
+    }
+}

@@ -1,0 +1,172 @@
+package coordination.core.curve;
+
+import coordination.core.CoordinationException;
+import coordination.core.internal.Checks;
+
+/**
+ * An inverse-time overcurrent stage in the general form of IEC 60255-151:2009, clause 5.4, and
+ * IEEE C37.112: {@code t(I) = M * (A / ((I/Ip)^p - 1) + B)} for I above the pickup Ip, and no
+ * operation at or below it.
+ *
+ * @param aSeconds constant A in seconds, above 0
+ * @param bSeconds constant B in seconds, 0 or more
+ * @param exponent exponent p, above 0
+ * @param resetConstantSeconds reset constant tr in seconds, or NaN if none
+ * @param pickupAmps pickup current Ip in amperes, above 0
+ * @param multiplier time multiplier setting (TMS) or time dial (TD), above 0
+ * @param highCurrent behaviour above {@code upperMultiple * Ip}
+ * @param upperMultiple multiple of pickup above which {@code highCurrent} applies, above 1
+ * @param label a name for messages, e.g. the family key
+ */
+public record InverseTimeStage(
+        double aSeconds,
+        double bSeconds,
+        double exponent,
+        double resetConstantSeconds,
+        double pickupAmps,
+        double multiplier,
+        HighCurrentBehaviour highCurrent,
+        double upperMultiple,
+        String label) implements TimeCurrentCurve {
+
+    /** The upper multiple of pickup that IEC 60255-151 states for the curves (common practice: 20). */
+    public static final double STANDARD_UPPER_MULTIPLE = 20.0;
+
+    /**
+     * Validates the parameters.
+     *
+     * @throws IllegalArgumentException if a constant or setting is out of its range
+     */
+    public InverseTimeStage {
+        Checks.positive(label + ": constant A", aSeconds, "s");
+        Checks.nonNegative(label + ": constant B", bSeconds, "s");
+        Checks.positive(label + ": exponent p", exponent, "");
+        Checks.positive(label + ": pickup", pickupAmps, "A");
+        Checks.positive(label + ": time multiplier", multiplier, "");
+        if (!(upperMultiple > 1.0) || !Double.isFinite(upperMultiple)) {
+            throw new IllegalArgumentException(label + ": upper multiple: found " + Checks.format(upperMultiple)
+                    + " - must be a finite number above 1");
+        }
+        if (highCurrent == null) {
+            throw new IllegalArgumentException(label + ": high-current behaviour: found null - must be given");
+        }
+    }
+
+    /**
+     * A stage of a standard family, following the equation at all currents.
+     *
+     * @param family the standard curve
+     * @param pickupAmps pickup current in amperes, above 0
+     * @param multiplier TMS for IEC families, time dial for IEEE families, above 0
+     * @return the stage
+     * @throws IllegalArgumentException if a setting is out of range
+     */
+    public static InverseTimeStage of(InverseTimeFamily family, double pickupAmps, double multiplier) {
+        return new InverseTimeStage(family.aSeconds(), family.bSeconds(), family.exponent(), family.resetSeconds(),
+                pickupAmps, multiplier, HighCurrentBehaviour.FOLLOW_EQUATION, STANDARD_UPPER_MULTIPLE, family.key());
+    }
+
+    /**
+     * This stage with another behaviour above an upper multiple of pickup.
+     *
+     * @param behaviour what to do above {@code multiple * pickup}
+     * @param multiple the upper multiple, above 1
+     * @return the new stage
+     */
+    public InverseTimeStage withHighCurrent(HighCurrentBehaviour behaviour, double multiple) {
+        return new InverseTimeStage(aSeconds, bSeconds, exponent, resetConstantSeconds, pickupAmps, multiplier,
+                behaviour, multiple, label);
+    }
+
+    /**
+     * This stage with another time multiplier.
+     *
+     * @param newMultiplier TMS or time dial, above 0
+     * @return the new stage
+     */
+    public InverseTimeStage withMultiplier(double newMultiplier) {
+        return new InverseTimeStage(aSeconds, bSeconds, exponent, resetConstantSeconds, pickupAmps, newMultiplier,
+                highCurrent, upperMultiple, label);
+    }
+
+    /**
+     * This stage with another pickup.
+     *
+     * @param newPickupAmps pickup in amperes, above 0
+     * @return the new stage
+     */
+    public InverseTimeStage withPickupAmps(double newPickupAmps) {
+        return new InverseTimeStage(aSeconds, bSeconds, exponent, resetConstantSeconds, newPickupAmps, multiplier,
+                highCurrent, upperMultiple, label);
+    }
+
+    @Override
+    public double seconds(double amps) {
+        Curves.checkCurrent(amps);
+        if (amps <= pickupAmps) {
+            return Double.POSITIVE_INFINITY;
+        }
+        double m = amps / pickupAmps;
+        if (highCurrent == HighCurrentBehaviour.HOLD_AT_UPPER_MULTIPLE && m > upperMultiple) {
+            m = upperMultiple;
+        }
+        // expm1 keeps (M^p - 1) accurate for small p and M close to 1
+        double denominator = Math.expm1(exponent * Math.log(m));
+        return multiplier * (aSeconds / denominator + bSeconds);
+    }
+
+    /**
+     * Reset time after the current falls to a value below pickup, from the electromechanical reset
+     * characteristic of IEEE C37.112 (and IEC 60255-151, clause 5.5):
+     * {@code t_r = M * tr / (1 - (I/Ip)^2)}.
+     *
+     * @param amps current in amperes, from 0 to below pickup
+     * @return reset time in seconds
+     * @throws CoordinationException if the stage has no reset constant
+     * @throws IllegalArgumentException if the current is not below pickup
+     */
+    public double resetSeconds(double amps) {
+        if (Double.isNaN(resetConstantSeconds)) {
+            throw new CoordinationException(label + ": the curve defines no reset characteristic");
+        }
+        Curves.checkCurrent(amps);
+        if (amps >= pickupAmps) {
+            throw new IllegalArgumentException(label + ": reset current: found " + Checks.format(amps)
+                    + " A - must be below the pickup of " + Checks.format(pickupAmps) + " A");
+        }
+        double m = amps / pickupAmps;
+        return multiplier * resetConstantSeconds / (1.0 - m * m);
+    }
+
+    /**
+     * The current at which the stage operates in a given time: the inverse of {@link #seconds}.
+     *
+     * @param seconds operating time in seconds
+     * @return current in amperes, or NaN where no current gives that time (at or below the
+     *     asymptote {@code M * B}, or inside a held region's flat time)
+     */
+    public double currentAtSeconds(double seconds) {
+        double reduced = seconds / multiplier - bSeconds;
+        if (!(reduced > 0) || Double.isInfinite(seconds)) {
+            return Double.NaN;
+        }
+        double m = Math.exp(Math.log1p(aSeconds / reduced) / exponent);
+        if (highCurrent == HighCurrentBehaviour.HOLD_AT_UPPER_MULTIPLE && m > upperMultiple) {
+            return Double.NaN;
+        }
+        return m * pickupAmps;
+    }
+
+    @Override
+    public double[] breakpointsAmps() {
+        if (highCurrent == HighCurrentBehaviour.HOLD_AT_UPPER_MULTIPLE) {
+            return new double[] {pickupAmps, pickupAmps * upperMultiple};
+        }
+        return new double[] {pickupAmps};
+    }
+
+    @Override
+    public String toString() {
+        return label + " Ip=" + Checks.format(pickupAmps) + " A M=" + Checks.format(multiplier);
+    }
+}

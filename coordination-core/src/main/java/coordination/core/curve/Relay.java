@@ -1,0 +1,117 @@
+package coordination.core.curve;
+
+import coordination.core.internal.Checks;
+import java.util.ArrayList;
+import java.util.List;
+
+/**
+ * An overcurrent relay and its circuit breaker: several stages acting together (the fastest wins),
+ * an optional current-transformer ratio and an optional breaker interrupting time.
+ *
+ * <p>With a CT ratio, stage pickups are relay settings in secondary amperes and are referred to the
+ * primary by multiplying with {@code primaryAmps / secondaryAmps}. The minimum curve is the relay's
+ * operating time; the maximum curve adds the breaker's interrupting time to give the clearing time.
+ */
+public final class Relay implements ProtectiveDevice {
+    private final String id;
+    private final List<TimeCurrentCurve> stages;
+    private final double ctRatio;
+    private final double breakerSeconds;
+    private final TimeCurrentCurve operating;
+    private final TimeCurrentCurve clearing;
+
+    /**
+     * Creates a relay.
+     *
+     * @param id identifier
+     * @param stages one or more stages, settings in secondary amperes when {@code ctRatio != 1}
+     * @param ctRatio CT primary amperes per secondary ampere, above 0; 1 when settings are primary
+     * @param breakerSeconds breaker interrupting time in seconds, 0 or more
+     * @throws IllegalArgumentException if no stage is given or a parameter is out of range
+     */
+    public Relay(String id, List<? extends TimeCurrentCurve> stages, double ctRatio, double breakerSeconds) {
+        this.id = id;
+        Checks.positive("relay '" + id + "': CT ratio", ctRatio, "");
+        Checks.nonNegative("relay '" + id + "': breaker interrupting time", breakerSeconds, "s");
+        this.stages = List.copyOf(stages);
+        this.ctRatio = ctRatio;
+        this.breakerSeconds = breakerSeconds;
+        List<TimeCurrentCurve> primary = new ArrayList<>();
+        for (TimeCurrentCurve s : stages) {
+            primary.add(s.scaledCurrent(ctRatio));
+        }
+        this.operating = new FastestOfCurve("relay '" + id + "'", primary);
+        this.clearing = operating.delayedBy(breakerSeconds);
+    }
+
+    /**
+     * A relay with primary settings and no breaker time.
+     *
+     * @param id identifier
+     * @param stages one or more stages in primary amperes
+     * @return the relay
+     */
+    public static Relay of(String id, TimeCurrentCurve... stages) {
+        return new Relay(id, List.of(stages), 1.0, 0.0);
+    }
+
+    /**
+     * This relay with another breaker interrupting time.
+     *
+     * @param seconds interrupting time in seconds, 0 or more
+     * @return the new relay
+     */
+    public Relay withBreakerSeconds(double seconds) {
+        return new Relay(id, stages, ctRatio, seconds);
+    }
+
+    /**
+     * This relay with other stages.
+     *
+     * @param newStages one or more stages
+     * @return the new relay
+     */
+    public Relay withStages(List<? extends TimeCurrentCurve> newStages) {
+        return new Relay(id, newStages, ctRatio, breakerSeconds);
+    }
+
+    @Override
+    public String id() {
+        return id;
+    }
+
+    @Override
+    public DeviceKind kind() {
+        return DeviceKind.RELAY;
+    }
+
+    /** @return the stages as set, in secondary amperes when a CT ratio is given */
+    public List<TimeCurrentCurve> stages() {
+        return stages;
+    }
+
+    /** @return CT primary amperes per secondary ampere */
+    public double ctRatio() {
+        return ctRatio;
+    }
+
+    /** @return breaker interrupting time in seconds */
+    public double breakerSeconds() {
+        return breakerSeconds;
+    }
+
+    @Override
+    public TimeCurrentCurve minimumCurve() {
+        return operating;
+    }
+
+    @Override
+    public TimeCurrentCurve maximumCurve() {
+        return clearing;
+    }
+
+    @Override
+    public String toString() {
+        return "relay '" + id + "'";
+    }
+}

@@ -1,0 +1,90 @@
+package coordination.core.curve;
+
+/**
+ * An operating-time characteristic: the time in seconds a device takes to operate (or clear) for
+ * a steady current in amperes. Time never rises as current rises.
+ *
+ * <p>A curve is defined on a current interval {@link #lowestDefinedAmps()} to
+ * {@link #highestDefinedAmps()}; inside it, {@link #seconds(double)} returns a time or
+ * {@link Double#POSITIVE_INFINITY} where the device does not operate (below pickup). Outside it
+ * (beyond the points of a digitised curve) the curve has no value and says so by throwing.
+ *
+ * <p>Implementations are immutable and safe to share between threads.
+ */
+public interface TimeCurrentCurve {
+
+    /**
+     * Operating time at a current.
+     *
+     * @param amps current in amperes, within the defined interval
+     * @return time in seconds, at or above 0, or {@link Double#POSITIVE_INFINITY} where the device
+     *     does not operate
+     * @throws CurveDomainException if {@code amps} lies outside the defined interval
+     * @throws IllegalArgumentException if {@code amps} is NaN or negative
+     */
+    double seconds(double amps);
+
+    /**
+     * Lowest current, in amperes, at which this curve has a value; 0 for equation-based curves.
+     *
+     * @return amperes, at or above 0
+     */
+    default double lowestDefinedAmps() {
+        return 0.0;
+    }
+
+    /**
+     * Highest current, in amperes, at which this curve has a value; infinity for equation-based
+     * curves.
+     *
+     * @return amperes
+     */
+    default double highestDefinedAmps() {
+        return Double.POSITIVE_INFINITY;
+    }
+
+    /**
+     * Currents, in amperes and ascending, at which the curve is not smooth: pickups, steps, the
+     * ends of held regions, digitised points. Between two consecutive breakpoints the curve is
+     * continuous and differentiable, which is what lets the margin engine solve instead of sample.
+     * At a step the value exactly at the breakpoint belongs to the higher-current side.
+     *
+     * @return a new array, ascending, possibly empty
+     */
+    double[] breakpointsAmps();
+
+    /**
+     * Whether {@link #seconds(double)} has a value at a current.
+     *
+     * @param amps current in amperes
+     * @return true inside the defined interval
+     */
+    default boolean isDefinedAt(double amps) {
+        return amps >= lowestDefinedAmps() && amps <= highestDefinedAmps();
+    }
+
+    /**
+     * This curve with its current axis multiplied by a factor: the curve a current transformer, or
+     * a voltage base change, makes of it. The scaled curve operates at {@code factor * I} as this one
+     * does at {@code I}.
+     *
+     * @param factor positive multiplier of the current axis
+     * @return the scaled curve
+     * @throws IllegalArgumentException if the factor is not a positive finite number
+     */
+    default TimeCurrentCurve scaledCurrent(double factor) {
+        return factor == 1.0 ? this : new ScaledCurve(this, factor, 0.0);
+    }
+
+    /**
+     * This curve with a constant time added where it operates: the interrupting time of a circuit
+     * breaker turns a relay's operating time into a clearing time.
+     *
+     * @param seconds added time in seconds, 0 or more
+     * @return the delayed curve
+     * @throws IllegalArgumentException if the time is negative or not finite
+     */
+    default TimeCurrentCurve delayedBy(double seconds) {
+        return seconds == 0.0 ? this : new ScaledCurve(this, 1.0, seconds);
+    }
+}

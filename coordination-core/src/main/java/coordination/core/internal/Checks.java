@@ -1,0 +1,96 @@
+package coordination.core.internal;
+
+import java.util.Locale;
+
+/** Argument checks that produce the project's "found ... - must be ..." messages. */
+public final class Checks {
+    private Checks() {
+    }
+
+    /**
+     * Requires a finite value strictly above zero.
+     *
+     * @param subject the subject and parameter name, e.g. {@code "stage pickup"}
+     * @param value the value
+     * @param unit its unit, e.g. {@code "A"}
+     * @return the value
+     * @throws IllegalArgumentException if the value is not finite or not above zero
+     */
+    public static double positive(String subject, double value, String unit) {
+        if (!(value > 0) || !Double.isFinite(value)) {
+            throw new IllegalArgumentException(
+                    subject + ": found " + format(value) + unitSuffix(unit) + " - must be a finite number above 0");
+        }
+        return value;
+    }
+
+    /**
+     * Requires a finite value at or above zero.
+     *
+     * @param subject the subject and parameter name
+     * @param value the value
+     * @param unit its unit
+     * @return the value
+     * @throws IllegalArgumentException if the value is negative or not finite
+     */
+    public static double nonNegative(String subject, double value, String unit) {
+        if (!(value >= 0) || !Double.isFinite(value)) {
+            throw new IllegalArgumentException(
+                    subject + ": found " + format(value) + unitSuffix(unit) + " - must be a finite number of 0 or more");
+        }
+        return value;
+    }
+
+    /**
+     * Requires a finite value inside a closed range.
+     *
+     * @param subject the subject and parameter name
+     * @param value the value
+     * @param min the smallest allowed value
+     * @param max the largest allowed value
+     * @param unit its unit
+     * @return the value
+     * @throws IllegalArgumentException if the value lies outside [min, max] or is not finite
+     */
+    public static double inRange(String subject, double value, double min, double max, String unit) {
+        if (!(value >= min && value <= max)) {
+            throw new IllegalArgumentException(subject + ": found " + format(value) + unitSuffix(unit)
+                    + " - must be from " + format(min) + " to " + format(max) + unitSuffix(unit));
+        }
+        return value;
+    }
+
+    /**
+     * Formats a number for a message: up to six significant digits, no exponent for ordinary values.
+     *
+     * @param value the number
+     * @return its text
+     */
+    public static String format(double value) {
+        if (Double.isNaN(value)) {
+            return "NaN";
+        }
+        if (Double.isInfinite(value)) {
+            return value > 0 ? "infinity" : "-infinity";
+        }
+        if (value == Math.rint(value) && Math.abs(value) < 1e15) {
+            return Long.toString((long) value);
+        }
+        double abs = Math.abs(value);
+        if (abs >= 1e-4 && abs < 1e9) {
+            String s = String.format(Locale.ROOT, "%.6g", value);
+            if (s.contains("e") || s.contains("E")) {
+                return s;
+            }
+            if (s.contains(".")) {
+                s = s.replaceAll("0+$", "").replaceAll("\\.$", "");
+            }
+            return s;
+        }
+        return String.format(Locale.ROOT, "%.6g", value);
+    }
+
+    private static String unitSuffix(String unit) {
+        return unit.isEmpty() ? "" : " " + unit;
+    }
+}

@@ -1,0 +1,144 @@
+package coordination.core.internal;
+
+import java.util.Arrays;
+import java.util.function.DoubleUnaryOperator;
+import org.apache.commons.math3.analysis.solvers.AllowedSolution;
+import org.apache.commons.math3.analysis.solvers.BracketingNthOrderBrentSolver;
+import org.apache.commons.math3.optim.MaxEval;
+import org.apache.commons.math3.optim.nonlinear.scalar.GoalType;
+import org.apache.commons.math3.optim.univariate.BrentOptimizer;
+import org.apache.commons.math3.optim.univariate.SearchInterval;
+import org.apache.commons.math3.optim.univariate.UnivariateObjectiveFunction;
+import org.apache.commons.math3.optim.univariate.UnivariatePointValuePair;
+
+/**
+ * Minimisation and root finding of a smooth function on one segment of the log-current axis.
+ * A short scan brackets the local minima and sign changes; Brent's methods then solve each one to
+ * near machine precision. The scan only brackets: every reported value comes from a solver or from
+ * an end of the segment.
+ */
+public final class LogAxis {
+    /** Interior scan points per segment, enough to bracket the extrema of power-law differences. */
+    private static final int SCAN = 10;
+    /** Absolute accuracy in ln(I) of roots and minima: 1e-12, i.e. currents to 1e-12 relative. */
+    private static final double X_ACCURACY = 1e-12;
+    private static final int MAX_EVALUATIONS = 200;
+
+    private LogAxis() {
+    }
+
+    /** A point of the axis: x = ln(I) and the function's value there. */
+    public record Point(double x, double value) {
+    }
+
+    /**
+     * Minimum of a function on [xa, xb], ends included.
+     *
+     * @param f the function of x = ln(I), finite on the segment
+     * @param xa left end
+     * @param xb right end, at or above xa
+     * @return the smallest value found and where
+     */
+    public static Point minimum(DoubleUnaryOperator f, double xa, double xb) {
+        if (!(xb > xa)) {
+            return new Point(xa, f.applyAsDouble(xa));
+        }
+        double[] xs = new double[SCAN + 2];
+        double[] vs = new double[SCAN + 2];
+        sample(f, xa, xb, xs, vs);
+        int best = 0;
+        for (int i = 1; i < xs.length; i++) {
+            if (vs[i] < vs[best]) {
+                best = i;
+            }
+        }
+        Point result = new Point(xs[best], vs[best]);
+        for (int i = 1; i < xs.length - 1; i++) {
+            if (vs[i] <= vs[i - 1] && vs[i] <= vs[i + 1]) {
+                Point p = refineMinimum(f, xs[i - 1], xs[i + 1], xs[i]);
+                if (p.value() < result.value()) {
+                    result = p;
+                }
+            }
+        }
+        return result;
+    }
+
+    /**
+     * Roots of a function on [xa, xb] where it changes sign: every bracket of the scan solved.
+     *
+     * @param f the function of x = ln(I)
+     * @param xa left end
+     * @param xb right end
+     * @return the roots, ascending
+     */
+    public static double[] roots(DoubleUnaryOperator f, double xa, double xb) {
+        if (!(xb > xa)) {
+            return new double[0];
+        }
+        double[] xs = new double[SCAN + 2];
+        double[] vs = new double[SCAN + 2];
+        sample(f, xa, xb, xs, vs);
+        double[] found = new double[xs.length];
+        int n = 0;
+        for (int i = 1; i < xs.length; i++) {
+            double v0 = vs[i - 1];
+            double v1 = vs[i];
+            if (v0 == 0.0 && i == 1) {
+                found[n++] = xs[0];
+            }
+            if (v1 == 0.0) {
+                found[n++] = xs[i];
+            } else if (v0 != 0.0 && Math.signum(v0) != Math.signum(v1) && !Double.isNaN(v0) && !Double.isNaN(v1)) {
+                found[n++] = solve(f, xs[i - 1], xs[i]);
+            }
+        }
+        return Arrays.copyOf(found, n);
+    }
+
+    private static void sample(DoubleUnaryOperator f, double xa, double xb, double[] xs, double[] vs) {
+        int last = xs.length - 1;
+        for (int i = 0; i <= last; i++) {
+            xs[i] = i == last ? xb : xa + (xb - xa) * i / last;
+            vs[i] = f.applyAsDouble(xs[i]);
+        }
+    }
+
+    private static Point refineMinimum(DoubleUnaryOperator f, double lo, double hi, double start) {
+        BrentOptimizer optimizer = new BrentOptimizer(1e-13, X_ACCURACY);
+        UnivariatePointValuePair p = optimizer.optimize(new MaxEval(MAX_EVALUATIONS),
+                new UnivariateObjectiveFunction(f::applyAsDouble), GoalType.MINIMIZE, new SearchInterval(lo, hi, start));
+        return new Point(p.getPoint(), p.getValue());
+    }
+
+    private static double solve(DoubleUnaryOperator f, double lo, double hi) {
+        double fl = f.applyAsDouble(lo);
+        double fh = f.applyAsDouble(hi);
+        if (Double.isInfinite(fl) || Double.isInfinite(fh)) {
+            // the solver needs finite ends: bisect until both ends are finite
+            return bisect(f, lo, hi, fl);
+        }
+        BracketingNthOrderBrentSolver solver = new BracketingNthOrderBrentSolver(1e-14, X_ACCURACY, 0.0, 5);
+        return solver.solve(MAX_EVALUATIONS, f::applyAsDouble, lo, hi, AllowedSolution.ANY_SIDE);
+    }
+
+    private static double bisect(DoubleUnaryOperator f, double lo, double hi, double flo) {
+        double a = lo;
+        double b = hi;
+        double fa = flo;
+        while (b - a > X_ACCURACY) {
+            double m = 0.5 * (a + b);
+            double fm = f.applyAsDouble(m);
+            if (fm == 0.0) {
+                return m;
+            }
+            if (Math.signum(fm) == Math.signum(fa)) {
+                a = m;
+                fa = fm;
+            } else {
+                b = m;
+            }
+        }
+        return 0.5 * (a + b);
+    }
+}

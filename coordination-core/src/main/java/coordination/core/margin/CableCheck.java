@@ -1,0 +1,340 @@
+package coordination.core.margin;
+
+import coordination.core.cable.CableThermalLimit;
+import coordination.core.cable.ThermalMethod;
+import coordination.core.curve.ProtectiveDevice;
+import coordination.core.curve.TimeCurrentCurve;
+import coordination.core.internal.Checks;
+import coordination.core.internal.LogAxis;
+import java.util.ArrayList;
+import java.util.Arrays;
+import java.util.List;
+import java.util.OptionalDouble;
+
+/**
+ * Whether a protective device clears every fault in a current range before a cable reaches its
+ * short-circuit temperature, and by how much: the minimum time margin, the minimum time ratio, the
+ * currents where they occur, and every crossing of the two curves, solved exactly.
+ *
+ * <p>The device's maximum (slowest, clearing) curve is used. The range is split at every
+ * breakpoint of the device curve and at the currents where its clearing time passes 0.1 s and 5 s,
+ * the edges of the adiabatic window. On each segment the curves are smooth, and the extremes and
+ * roots are solved with Brent's methods on the log-current axis (Apache Commons Math). At a step
+ * of the device curve both one-sided limits are compared, so a minimum at a step is reported at the
+ * step with the side on which it occurs.
+ *
+ * <p>Below 0.1 s the comparison is of let-through energy, I² t_device against k²S², which on
+ * these axes is the same comparison; with a {@link DcOffset} the device's time there is increased
+ * to the thermally equivalent {@code (1 + m) t} of IEC 60909-0. Above the device's digitised range,
+ * a fuse's stated clearing I²t is used as constant let-through energy. Above 5 s the adiabatic
+ * limit is conservative and reported as such, unless the cable uses the non-adiabatic method.
+ */
+public final class CableCheck {
+    /** Offset in ln(I) used to take one-sided limits at a step of a curve. */
+    private static final double SIDE_OFFSET = 1e-11;
+
+    private final ProtectiveDevice device;
+    private final CableThermalLimit cable;
+    private final double fromAmps;
+    private final double toAmps;
+    private final MarginRequirement requirement;
+    private final DcOffset dcOffset;
+    private final TimeCurrentCurve curve;
+    private final double letThrough;
+    private final CableCheckResult result;
+
+    /**
+     * Runs the check.
+     *
+     * @param device the protective device; its maximum curve is checked
+     * @param cable the cable
+     * @param fromAmps lowest prospective fault current in amperes, above 0
+     * @param toAmps highest prospective fault current in amperes, at or above {@code fromAmps}
+     * @param requirement the margin asked for
+     * @param dcOffset DC-offset heating below 0.1 s, or null to ignore it
+     * @throws IllegalArgumentException if the range is invalid
+     */
+    public CableCheck(ProtectiveDevice device, CableThermalLimit cable, double fromAmps, double toAmps,
+            MarginRequirement requirement, DcOffset dcOffset) {
+        Checks.positive("check range: lowest current", fromAmps, "A");
+        Checks.positive("check range: highest current", toAmps, "A");
+        if (toAmps < fromAmps) {
+            throw new IllegalArgumentException("check range: highest current " + Checks.format(toAmps)
+                    + " A is below the lowest " + Checks.format(fromAmps) + " A - must be at or above it");
+        }
+        this.device = device;
+        this.cable = cable;
+        this.fromAmps = fromAmps;
+        this.toAmps = toAmps;
+        this.requirement = requirement;
+        this.dcOffset = dcOffset;
+        this.curve = device.maximumCurve();
+        OptionalDouble i2t = device.clearingI2tA2s();
+        this.letThrough = i2t.isPresent() ? i2t.getAsDouble() : Double.NaN;
+        this.result = compute();
+    }
+
+    /**
+     * Runs a check without DC-offset heating.
+     *
+     * @param device the protective device
+     * @param cable the cable
+     * @param fromAmps lowest fault current in amperes
+     * @param toAmps highest fault current in amperes
+     * @param requirement the margin asked for
+     * @return the result
+     */
+    public static CableCheckResult check(ProtectiveDevice device, CableThermalLimit cable, double fromAmps,
+            double toAmps, MarginRequirement requirement) {
+        return new CableCheck(device, cable, fromAmps, toAmps, requirement, null).result();
+    }
+
+    /** @return the result */
+    public CableCheckResult result() {
+        return result;
+    }
+
+    /**
+     * Device clearing time at a current, with the stated let-through energy above a digitised range.
+     *
+     * @param amps current in amperes
+     * @return seconds, infinity where it does not clear, NaN where it has no value
+     */
+    public double deviceSeconds(double amps) {
+        if (curve.isDefinedAt(amps)) {
+            return curve.seconds(amps);
+        }
+        if (amps > curve.highestDefinedAmps() && !Double.isNaN(letThrough)) {
+            return letThrough / (amps * amps);
+        }
+        return Double.NaN;
+    }
+
+    /**
+     * The device's thermally equivalent time: its clearing time, increased below 0.1 s by the
+     * DC-offset factor when one is given.
+     *
+     * @param amps current in amperes
+     * @return seconds
+     */
+    public double equivalentSeconds(double amps) {
+        double t = deviceSeconds(amps);
+        if (dcOffset != null && t > 0 && t < CableThermalLimit.ADIABATIC_MIN_SECONDS) {
+            return t * (1 + dcOffset.m(t));
+        }
+        return t;
+    }
+
+    private CableCheckResult compute() {
+        double[] points = splitPoints();
+        Extremes ex = new Extremes();
+        List<Double> crossings = new ArrayList<>();
+        List<ThermalRegion> regions = new ArrayList<>();
+        double prevRatioLog = Double.NaN;
+        for (int i = 0; i + 1 < points.length || i == 0 && points.length == 1; i++) {
+            double a = points[i];
+            double b = points.length == 1 ? a : points[i + 1];
+            double xa = Math.log(a) + (i == 0 ? 0.0 : SIDE_OFFSET);
+            double xb = Math.log(b) - (i + 2 == points.length || points.length == 1 ? 0.0 : SIDE_OFFSET);
+            if (xb < xa) {
+                xb = xa;
+            }
+            double tMid = deviceSeconds(Math.exp(0.5 * (xa + xb)));
+            double tRight = deviceSeconds(Math.exp(xb));
+            if (Double.isNaN(tMid) || Double.isNaN(tRight)) {
+                ex.undefined(a, b);
+                addRegion(regions, a, b, ThermalRegion.UNDEFINED);
+                prevRatioLog = Double.NaN;
+                continue;
+            }
+            if (Double.isInfinite(tRight)) {
+                ex.notCleared(a, b);
+                addRegion(regions, a, b, ThermalRegion.NOT_CLEARED);
+                prevRatioLog = Double.NEGATIVE_INFINITY;
+                continue;
+            }
+            addRegion(regions, a, b, method(tMid));
+            double leftRatioLog = logRatio(xa);
+            if (i > 0 && !Double.isNaN(prevRatioLog) && crosses(prevRatioLog, leftRatioLog)) {
+                crossings.add(a);
+            }
+            // minimum time margin and minimum ratio on this smooth segment
+            LogAxis.Point margin = LogAxis.minimum(this::margin, xa, xb);
+            ex.margin(margin, a, b, xa, xb, i == 0, i + 2 == points.length || points.length == 1);
+            LogAxis.Point ratio = LogAxis.minimum(this::logRatio, xa, xb);
+            ex.ratio(ratio, a, b, xa, xb, i == 0, i + 2 == points.length || points.length == 1);
+            for (double root : LogAxis.roots(this::logRatio, xa, xb)) {
+                double amps = Math.exp(root);
+                if (amps > fromAmps && amps < toAmps) {
+                    crossings.add(amps);
+                }
+            }
+            prevRatioLog = logRatio(xb);
+            if (points.length == 1) {
+                break;
+            }
+        }
+        double[] c = crossings.stream().mapToDouble(Double::doubleValue).sorted().distinct().toArray();
+        boolean clearsEverywhere = Double.isNaN(ex.notClearedFrom) && Double.isNaN(ex.undefinedFrom);
+        boolean pass = clearsEverywhere && !Double.isNaN(ex.minMargin)
+                && requirement.isMetBy(ex.minMargin, Math.exp(ex.minLogRatio));
+        return new CableCheckResult(device.id(), cable.id(), fromAmps, toAmps, requirement, pass, ex.minMargin,
+                ex.minMarginAt, ex.minMarginSide, Math.exp(ex.minLogRatio), ex.minRatioAt, ex.minRatioSide, c,
+                ex.notClearedFrom, ex.notClearedTo, ex.undefinedFrom, ex.undefinedTo, regions);
+    }
+
+    private static boolean crosses(double before, double after) {
+        return before < 0 && after > 0 || before > 0 && after < 0;
+    }
+
+    private double margin(double x) {
+        double amps = Math.exp(x);
+        return cable.damageSeconds(amps) - equivalentSeconds(amps);
+    }
+
+    private double logRatio(double x) {
+        double amps = Math.exp(x);
+        double te = equivalentSeconds(amps);
+        double tc = cable.damageSeconds(amps);
+        if (te == 0.0) {
+            return Double.POSITIVE_INFINITY;
+        }
+        return Math.log(tc) - Math.log(te);
+    }
+
+    private String method(double deviceSeconds) {
+        if (deviceSeconds < CableThermalLimit.ADIABATIC_MIN_SECONDS) {
+            return dcOffset != null ? ThermalRegion.ENERGY_DC_OFFSET : ThermalRegion.ENERGY;
+        }
+        if (cable.method() == ThermalMethod.ICEA) {
+            return ThermalRegion.ICEA;
+        }
+        if (cable.method() == ThermalMethod.NON_ADIABATIC) {
+            return ThermalRegion.NON_ADIABATIC;
+        }
+        return deviceSeconds > CableThermalLimit.ADIABATIC_MAX_SECONDS ? ThermalRegion.ADIABATIC_CONSERVATIVE
+                : ThermalRegion.ADIABATIC;
+    }
+
+    private static void addRegion(List<ThermalRegion> regions, double a, double b, String method) {
+        if (!regions.isEmpty() && regions.get(regions.size() - 1).method().equals(method)) {
+            ThermalRegion last = regions.remove(regions.size() - 1);
+            regions.add(new ThermalRegion(last.fromAmps(), b, method));
+        } else {
+            regions.add(new ThermalRegion(a, b, method));
+        }
+    }
+
+    /** The range ends, the device's breakpoints inside, and the window edges. */
+    private double[] splitPoints() {
+        double[] bp = curve.breakpointsAmps();
+        double[] pts = new double[bp.length + 4];
+        int n = 0;
+        pts[n++] = fromAmps;
+        pts[n++] = toAmps;
+        for (double b : bp) {
+            if (b > fromAmps && b < toAmps) {
+                pts[n++] = b;
+            }
+        }
+        for (double edge : new double[] {curve.lowestDefinedAmps(), curve.highestDefinedAmps()}) {
+            if (edge > fromAmps && edge < toAmps) {
+                pts[n++] = edge;
+            }
+        }
+        double[] base = sortedUnique(Arrays.copyOf(pts, n));
+        // window edges: where the clearing time passes 0.1 s and 5 s inside a smooth segment
+        double[] edges = new double[2 * base.length + 2];
+        int m = 0;
+        for (int i = 0; i + 1 < base.length; i++) {
+            double xa = Math.log(base[i]) + (i == 0 ? 0 : SIDE_OFFSET);
+            double xb = Math.log(base[i + 1]) - (i + 2 == base.length ? 0 : SIDE_OFFSET);
+            if (!(xb > xa) || Double.isNaN(deviceSeconds(Math.exp(0.5 * (xa + xb))))) {
+                continue;
+            }
+            for (double limit : new double[] {CableThermalLimit.ADIABATIC_MIN_SECONDS,
+                CableThermalLimit.ADIABATIC_MAX_SECONDS}) {
+                double logLimit = Math.log(limit);
+                for (double r : LogAxis.roots(x -> Math.log(deviceSeconds(Math.exp(x))) - logLimit, xa, xb)) {
+                    if (m < edges.length) {
+                        edges[m++] = Math.exp(r);
+                    }
+                }
+            }
+        }
+        double[] all = Arrays.copyOf(base, base.length + m);
+        System.arraycopy(edges, 0, all, base.length, m);
+        return sortedUnique(all);
+    }
+
+    private double[] sortedUnique(double[] values) {
+        Arrays.sort(values);
+        int k = 0;
+        for (double v : values) {
+            if (v >= fromAmps && v <= toAmps && (k == 0 || v > values[k - 1])) {
+                values[k++] = v;
+            }
+        }
+        return Arrays.copyOf(values, k);
+    }
+
+    /** Running minima over the segments, with their locations and sides. */
+    private static final class Extremes {
+        double minMargin = Double.NaN;
+        double minMarginAt = Double.NaN;
+        Side minMarginSide = Side.AT;
+        double minLogRatio = Double.NaN;
+        double minRatioAt = Double.NaN;
+        Side minRatioSide = Side.AT;
+        double notClearedFrom = Double.NaN;
+        double notClearedTo = Double.NaN;
+        double undefinedFrom = Double.NaN;
+        double undefinedTo = Double.NaN;
+
+        void margin(LogAxis.Point p, double a, double b, double xa, double xb, boolean first, boolean last) {
+            if (Double.isNaN(minMargin) || p.value() < minMargin) {
+                minMargin = p.value();
+                minMarginAt = locate(p.x(), a, b, xa, xb);
+                minMarginSide = side(p.x(), xa, xb, first, last);
+            }
+        }
+
+        void ratio(LogAxis.Point p, double a, double b, double xa, double xb, boolean first, boolean last) {
+            if (Double.isNaN(minLogRatio) || p.value() < minLogRatio) {
+                minLogRatio = p.value();
+                minRatioAt = locate(p.x(), a, b, xa, xb);
+                minRatioSide = side(p.x(), xa, xb, first, last);
+            }
+        }
+
+        void notCleared(double a, double b) {
+            notClearedFrom = Double.isNaN(notClearedFrom) ? a : Math.min(notClearedFrom, a);
+            notClearedTo = Double.isNaN(notClearedTo) ? b : Math.max(notClearedTo, b);
+        }
+
+        void undefined(double a, double b) {
+            undefinedFrom = Double.isNaN(undefinedFrom) ? a : Math.min(undefinedFrom, a);
+            undefinedTo = Double.isNaN(undefinedTo) ? b : Math.max(undefinedTo, b);
+        }
+
+        private static double locate(double x, double a, double b, double xa, double xb) {
+            if (x <= xa) {
+                return a;
+            }
+            if (x >= xb) {
+                return b;
+            }
+            return Math.exp(x);
+        }
+
+        private static Side side(double x, double xa, double xb, boolean first, boolean last) {
+            if (x <= xa && !first) {
+                return Side.ABOVE;
+            }
+            if (x >= xb && !last) {
+                return Side.BELOW;
+            }
+            return Side.AT;
+        }
+    }
+}

@@ -1,0 +1,46 @@
+package coordination.core.margin;
+
+import coordination.core.internal.Checks;
+
+/**
+ * Heating by the decaying DC component of a short-circuit current, as the factor m of
+ * IEC 60909-0:2016, clause 12 (thermal equivalent short-circuit current):
+ *
+ * <pre>m = 1 / (2 f T ln(κ - 1)) × (e^(4 f T ln(κ - 1)) - 1)</pre>
+ *
+ * With the AC factor n = 1 (far from generators) the fault heats the conductor as a steady current
+ * for {@code (1 + m) T}. As κ approaches 2 the formula becomes 0/0; its limit, m = 2, is taken
+ * there through {@code expm1(x)/x}.
+ *
+ * @param kappa peak factor κ of the fault current, above 1 and at most 2
+ * @param frequencyHz system frequency in Hz, above 0
+ */
+public record DcOffset(double kappa, double frequencyHz) {
+
+    /**
+     * Validates the parameters.
+     *
+     * @throws IllegalArgumentException if κ is not in (1, 2] or the frequency is not above 0
+     */
+    public DcOffset {
+        if (!(kappa > 1.0 && kappa <= 2.0)) {
+            throw new IllegalArgumentException("peak factor kappa: found " + Checks.format(kappa)
+                    + " - must be above 1 and at most 2");
+        }
+        Checks.positive("frequency", frequencyHz, "Hz");
+    }
+
+    /**
+     * The factor m for a fault duration.
+     *
+     * @param seconds fault duration T in seconds, above 0
+     * @return m, from 0 to 2
+     */
+    public double m(double seconds) {
+        double x = 4.0 * frequencyHz * seconds * Math.log(kappa - 1.0);
+        if (Math.abs(x) < 1e-9) {
+            return 2.0 * (1.0 + x / 2.0);
+        }
+        return 2.0 * Math.expm1(x) / x;
+    }
+}
