@@ -103,7 +103,7 @@ public record MiniatureBreaker(String id, McbType type, double ratedAmps, double
             double t;
             if (m <= KNEE_MULTIPLE) {
                 double f = Math.log(m / startMultiple) / Math.log(KNEE_MULTIPLE / startMultiple);
-                t = Math.exp(Math.log(CONVENTIONAL_SECONDS) + f * (Math.log(kneeSeconds) - Math.log(CONVENTIONAL_SECONDS)));
+                t = CONVENTIONAL_SECONDS * Math.exp(f * Math.log(kneeSeconds / CONVENTIONAL_SECONDS));
             } else {
                 double r = KNEE_MULTIPLE / m;
                 t = kneeSeconds * r * r;

@@ -1,0 +1,105 @@
+package coordination.core.curve;
+
+import static org.hamcrest.MatcherAssert.assertThat;
+import static org.hamcrest.Matchers.closeTo;
+import static org.hamcrest.Matchers.is;
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertThrows;
+
+import coordination.core.CoordinationException;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.params.ParameterizedTest;
+import org.junit.jupiter.params.provider.CsvFileSource;
+
+class InverseTimeStageTest {
+    /** Times computed by an independent script from the same equation: agreement to rounding. */
+    private static final double EQUATION_RELATIVE = 1e-12;
+    /** Published tables give three significant figures. */
+    private static final double TABLE_RELATIVE = 0.005;
+
+    @ParameterizedTest(name = "{0} Ip={1} A M={2} at {3} A")
+    @CsvFileSource(resources = "/reference/inverse-time-operate-times.csv")
+    void operateTimeMatchesIec60255AndIeeeC37112Equations(String curve, double pickup, double multiplier,
+            double amps, double seconds) {
+        // IEC 60255-151:2009 clause 5.4 and IEEE C37.112, computed by src/test/python/inverse_time_reference.py
+        InverseTimeStage stage = InverseTimeStage.of(InverseTimeFamily.byKey(curve), pickup, multiplier);
+        assertThat(stage.seconds(amps), closeTo(seconds, seconds * EQUATION_RELATIVE));
+    }
+
+    @ParameterizedTest(name = "{0} at 10 x pickup")
+    @CsvFileSource(resources = "/reference/inverse-time-published-points.csv")
+    void operateTimeAtTenTimesPickupMatchesTabulatedValue(String curve, double seconds) {
+        // commonly tabulated values at M = 10 and multiplier 1, from memory
+        InverseTimeStage stage = InverseTimeStage.of(InverseTimeFamily.byKey(curve), 100, 1.0);
+        assertThat(stage.seconds(1000), closeTo(seconds, seconds * TABLE_RELATIVE));
+    }
+
+    @Test
+    void doesNotOperateAtOrBelowPickup() {
+        InverseTimeStage stage = InverseTimeStage.of(InverseTimeFamily.IEC_STANDARD_INVERSE, 250, 0.2);
+        assertThat(stage.seconds(250), is(Double.POSITIVE_INFINITY));
+        assertThat(stage.seconds(100), is(Double.POSITIVE_INFINITY));
+    }
+
+    @Test
+    void followsTheEquationAboveTwentyTimesByDefault() {
+        InverseTimeStage stage = InverseTimeStage.of(InverseTimeFamily.IEC_VERY_INVERSE, 100, 1.0);
+        // 13.5 / (40 - 1) = 0.346154 s
+        assertThat(stage.seconds(4000), closeTo(13.5 / 39, 1e-12));
+    }
+
+    @Test
+    void holdsTheTimeAtTwentyTimesWhenAsked() {
+        InverseTimeStage stage = InverseTimeStage.of(InverseTimeFamily.IEC_VERY_INVERSE, 100, 1.0)
+                .withHighCurrent(HighCurrentBehaviour.HOLD_AT_UPPER_MULTIPLE, 20);
+        assertThat(stage.seconds(4000), closeTo(13.5 / 19, 1e-12));
+        assertThat(stage.seconds(2000), closeTo(13.5 / 19, 1e-12));
+        assertThat(stage.breakpointsAmps()[1], is(2000.0));
+    }
+
+    @Test
+    void ieeeResetFollowsTheElectromechanicalCharacteristic() {
+        // IEEE C37.112: t_r = TD tr / (1 - M^2); very inverse tr = 21.6 s; worked: TD 2, M 0.5 -> 57.6 s
+        InverseTimeStage stage = InverseTimeStage.of(InverseTimeFamily.IEEE_VERY_INVERSE, 100, 2.0);
+        assertThat(stage.resetSeconds(50), closeTo(57.6, 1e-12));
+        assertThat(stage.resetSeconds(0), closeTo(43.2, 1e-12));
+    }
+
+    @Test
+    void iecFamilyHasNoResetCharacteristic() {
+        InverseTimeStage stage = InverseTimeStage.of(InverseTimeFamily.IEC_STANDARD_INVERSE, 100, 0.1);
+        CoordinationException e = assertThrows(CoordinationException.class, () -> stage.resetSeconds(50));
+        assertEquals("iec-standard-inverse: the curve defines no reset characteristic", e.getMessage());
+    }
+
+    @Test
+    void currentAtSecondsInvertsTheEquation() {
+        InverseTimeStage stage = InverseTimeStage.of(InverseTimeFamily.IEEE_EXTREMELY_INVERSE, 300, 3.0);
+        for (double amps : new double[] {330, 600, 3000, 30000}) {
+            assertThat(stage.currentAtSeconds(stage.seconds(amps)), closeTo(amps, amps * 1e-12));
+        }
+    }
+
+    @Test
+    void userCoefficientsFollowTheGeneralForm() {
+        InverseTimeStage stage = new InverseTimeStage(10, 0.5, 1.5, Double.NaN, 100, 2, HighCurrentBehaviour.FOLLOW_EQUATION,
+                20, "user");
+        // 2 x (10 / (4^1.5 - 1) + 0.5) = 2 x (10/7 + 0.5)
+        assertThat(stage.seconds(400), closeTo(2 * (10.0 / 7 + 0.5), 1e-12));
+    }
+
+    @Test
+    void zeroPickupIsRefusedWithValueAndRange() {
+        IllegalArgumentException e = assertThrows(IllegalArgumentException.class,
+                () -> InverseTimeStage.of(InverseTimeFamily.IEC_STANDARD_INVERSE, 0, 0.1));
+        assertEquals("iec-standard-inverse: pickup: found 0 A - must be a finite number above 0", e.getMessage());
+    }
+
+    @Test
+    void negativeTmsIsRefused() {
+        IllegalArgumentException e = assertThrows(IllegalArgumentException.class,
+                () -> InverseTimeStage.of(InverseTimeFamily.IEC_STANDARD_INVERSE, 100, -0.1));
+        assertEquals("iec-standard-inverse: time multiplier: found -0.1 - must be a finite number above 0",
+                e.getMessage());
+    }
+}

@@ -1,0 +1,85 @@
+package coordination.core.curve;
+
+import static org.hamcrest.MatcherAssert.assertThat;
+import static org.hamcrest.Matchers.greaterThanOrEqualTo;
+import static org.hamcrest.Matchers.is;
+import static org.hamcrest.Matchers.lessThanOrEqualTo;
+
+import java.util.SplittableRandom;
+import org.junit.jupiter.api.Test;
+
+/**
+ * The contract every protective device and its curves must keep. One small subclass per
+ * implementation supplies random devices from a seed.
+ */
+abstract class TimeCurrentCurveContractTest {
+    private static final int CASES = 200;
+    private static final int POINTS = 400;
+
+    /** @return a random device of the implementation under test */
+    abstract ProtectiveDevice device(SplittableRandom random);
+
+    /** @return the lowest current, in amperes, at which the device may operate at all */
+    abstract double lowestOperatingAmps(ProtectiveDevice device);
+
+    @Test
+    void operatingTimeNeverRisesWithCurrent() {
+        SplittableRandom r = new SplittableRandom(42);
+        for (int c = 0; c < CASES; c++) {
+            ProtectiveDevice d = device(r);
+            for (TimeCurrentCurve curve : new TimeCurrentCurve[] {d.minimumCurve(), d.maximumCurve()}) {
+                double lo = Math.max(curve.lowestDefinedAmps(), lowestOperatingAmps(d) * 0.5);
+                double hi = Math.min(curve.highestDefinedAmps(), lowestOperatingAmps(d) * 200);
+                double previous = Double.POSITIVE_INFINITY;
+                for (int i = 0; i <= POINTS; i++) {
+                    double amps = Math.min(hi, lo * Math.pow(hi / lo, (double) i / POINTS));
+                    double t = curve.seconds(amps);
+                    assertThat(curve + " at " + amps + " A", t, lessThanOrEqualTo(previous));
+                    assertThat(t, greaterThanOrEqualTo(0.0));
+                    previous = t;
+                }
+            }
+        }
+    }
+
+    @Test
+    void doesNotOperateBelowPickup() {
+        SplittableRandom r = new SplittableRandom(43);
+        for (int c = 0; c < CASES; c++) {
+            ProtectiveDevice d = device(r);
+            TimeCurrentCurve curve = d.minimumCurve();
+            double below = lowestOperatingAmps(d) * 0.999;
+            if (curve.isDefinedAt(below)) {
+                assertThat(curve + " at " + below + " A", curve.seconds(below), is(Double.POSITIVE_INFINITY));
+            }
+        }
+    }
+
+    @Test
+    void minimumCurveIsNeverAboveMaximumCurve() {
+        SplittableRandom r = new SplittableRandom(44);
+        for (int c = 0; c < CASES; c++) {
+            ProtectiveDevice d = device(r);
+            double lo = Math.max(d.minimumCurve().lowestDefinedAmps(), d.maximumCurve().lowestDefinedAmps());
+            lo = Math.max(lo, lowestOperatingAmps(d) * 0.5);
+            double hi = Math.min(d.minimumCurve().highestDefinedAmps(), d.maximumCurve().highestDefinedAmps());
+            hi = Math.min(hi, lowestOperatingAmps(d) * 200);
+            for (int i = 0; i <= POINTS; i++) {
+                double amps = Math.min(hi, lo * Math.pow(hi / lo, (double) i / POINTS));
+                assertThat(d + " at " + amps + " A", d.minimumCurve().seconds(amps),
+                        lessThanOrEqualTo(d.maximumCurve().seconds(amps)));
+            }
+        }
+    }
+
+    @Test
+    void breakpointsAscend() {
+        SplittableRandom r = new SplittableRandom(45);
+        for (int c = 0; c < CASES; c++) {
+            double[] b = device(r).maximumCurve().breakpointsAmps();
+            for (int i = 1; i < b.length; i++) {
+                assertThat(b[i], greaterThanOrEqualTo(b[i - 1]));
+            }
+        }
+    }
+}
