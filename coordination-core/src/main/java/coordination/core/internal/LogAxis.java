@@ -53,9 +53,15 @@ public final class LogAxis {
             }
         }
         Point result = new Point(xs[best], vs[best]);
-        for (int i = 1; i < xs.length - 1; i++) {
-            if (vs[i] <= vs[i - 1] && vs[i] <= vs[i + 1]) {
-                Point p = refineMinimum(f, xs[i - 1], xs[i + 1], xs[i]);
+        int last = xs.length - 1;
+        for (int i = 0; i <= last; i++) {
+            boolean belowLeft = i == 0 || vs[i] <= vs[i - 1];
+            boolean belowRight = i == last || vs[i] <= vs[i + 1];
+            if (belowLeft && belowRight) {
+                // an end sample lowest among its neighbours may still hide an interior minimum next to it
+                int lo = Math.max(0, i - 1);
+                int hi = Math.min(last, i + 1);
+                Point p = refineMinimum(f, xs[lo], xs[hi], i == 0 || i == last ? 0.5 * (xs[lo] + xs[hi]) : xs[i]);
                 if (p.value() < result.value()) {
                     result = p;
                 }
@@ -94,6 +100,26 @@ public final class LogAxis {
             }
         }
         return Arrays.copyOf(found, n);
+    }
+
+    /** Probe distance in ln(I) for telling a pole of a curve from a finite step. */
+    public static final double DIVERGENCE_PROBE = 1e-8;
+
+    /**
+     * Whether a time function grows without bound towards x from above: an infinite value there,
+     * or a hundredfold growth between probes {@link #DIVERGENCE_PROBE} and x (a finite step changes
+     * by almost nothing so close; a pole of 1/(M^p - 1) grows about a thousandfold).
+     *
+     * @param time the time as a function of x = ln(I)
+     * @param x the point
+     * @return true at a pole
+     */
+    public static boolean divergesAt(DoubleUnaryOperator time, double x) {
+        double near = time.applyAsDouble(x);
+        if (Double.isInfinite(near)) {
+            return true;
+        }
+        return near > 100 * time.applyAsDouble(x + DIVERGENCE_PROBE);
     }
 
     private static void sample(DoubleUnaryOperator f, double xa, double xb, double[] xs, double[] vs) {

@@ -154,6 +154,14 @@ public final class CableCheck {
                 continue;
             }
             addRegion(regions, a, b, method(tMid));
+            if (divergesAt(xa)) {
+                // an inverse stage's asymptote at its pickup: the margin has no lower bound there
+                ex.unbounded(a, i == 0 ? Side.AT : Side.ABOVE);
+                if (i == 0 && Double.isInfinite(deviceSeconds(a))) {
+                    ex.notCleared(a, a);
+                }
+                xa = Math.min(xb, xa + LogAxis.DIVERGENCE_PROBE);
+            }
             double leftRatioLog = logRatio(xa);
             if (i > 0 && !Double.isNaN(prevRatioLog) && crosses(prevRatioLog, leftRatioLog)) {
                 crossings.add(a);
@@ -181,6 +189,10 @@ public final class CableCheck {
         return new CableCheckResult(device.id(), cable.id(), fromAmps, toAmps, requirement, pass, ex.minMargin,
                 ex.minMarginAt, ex.minMarginSide, Math.exp(ex.minLogRatio), ex.minRatioAt, ex.minRatioSide, c,
                 ex.notClearedFrom, ex.notClearedTo, ex.undefinedFrom, ex.undefinedTo, regions);
+    }
+
+    private boolean divergesAt(double x) {
+        return LogAxis.divergesAt(v -> deviceSeconds(Math.exp(v)), x);
     }
 
     private static boolean crosses(double before, double after) {
@@ -296,6 +308,17 @@ public final class CableCheck {
                 minMargin = p.value();
                 minMarginAt = locate(p.x(), a, b, xa, xb);
                 minMarginSide = side(p.x(), xa, xb, first, last);
+            }
+        }
+
+        void unbounded(double a, Side side) {
+            if (!(minMargin == Double.NEGATIVE_INFINITY)) {
+                minMargin = Double.NEGATIVE_INFINITY;
+                minMarginAt = a;
+                minMarginSide = side;
+                minLogRatio = Double.NEGATIVE_INFINITY;
+                minRatioAt = a;
+                minRatioSide = side;
             }
         }
 

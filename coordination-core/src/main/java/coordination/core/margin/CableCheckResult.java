@@ -70,6 +70,10 @@ public record CableCheckResult(
             return "'" + device + "' does not clear from " + Checks.format(notClearedFromAmps) + " A to "
                     + Checks.format(notClearedToAmps) + " A";
         }
+        if (minMarginSeconds == Double.NEGATIVE_INFINITY) {
+            return "'" + device + "' slows without bound towards its pickup at " + Checks.format(minMarginAtAmps)
+                    + " A: no margin there";
+        }
         String where = "minimum margin " + Checks.format(minMarginSeconds) + " s at " + Checks.format(minMarginAtAmps)
                 + " A, ratio " + Checks.format(minRatio) + " at " + Checks.format(minRatioAtAmps) + " A";
         return (pass ? "meets " : "fails ") + requirement + ": " + where;

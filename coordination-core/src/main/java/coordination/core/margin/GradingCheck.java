@@ -129,6 +129,15 @@ public final class GradingCheck {
                 prevLog = Double.NEGATIVE_INFINITY;
                 continue;
             }
+            if (LogAxis.divergesAt(v -> time(down, Math.exp(v)), xa)) {
+                // the downstream curve's asymptote at its pickup: the interval has no lower bound there
+                if (!(minInterval == Double.NEGATIVE_INFINITY)) {
+                    minInterval = Double.NEGATIVE_INFINITY;
+                    minAt = a;
+                    minSide = first ? Side.AT : Side.ABOVE;
+                }
+                xa = Math.min(xb, xa + LogAxis.DIVERGENCE_PROBE);
+            }
             double leftLog = logRatio(xa);
             if (!first && !Double.isNaN(prevLog) && (prevLog < 0 && leftLog > 0 || prevLog > 0 && leftLog < 0)) {
                 crossings.add(a);

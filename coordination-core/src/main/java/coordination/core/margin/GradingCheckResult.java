@@ -65,7 +65,7 @@ public record GradingCheckResult(
             return "neither device operates in the range";
         }
         if (minIntervalSeconds == Double.NEGATIVE_INFINITY) {
-            return "'" + upstream + "' operates where '" + downstream + "' does not, at "
+            return "'" + upstream + "' operates where '" + downstream + "' does not or slows without bound, at "
                     + Checks.format(minIntervalAtAmps) + " A";
         }
         String s = "minimum interval " + Checks.format(minIntervalSeconds) + " s at " + Checks.format(minIntervalAtAmps)
