@@ -19,7 +19,7 @@ import org.apache.commons.math3.optim.univariate.UnivariatePointValuePair;
  */
 public final class LogAxis {
     /** Interior scan points per segment, enough to bracket the extrema of power-law differences. */
-    private static final int SCAN = 10;
+    private static final int SCAN = 8;
     /** Absolute accuracy in ln(I) of roots and minima: 1e-12, i.e. currents to 1e-12 relative. */
     private static final double X_ACCURACY = 1e-12;
     private static final int MAX_EVALUATIONS = 200;
@@ -29,6 +29,25 @@ public final class LogAxis {
 
     /** A point of the axis: x = ln(I) and the function's value there. */
     public record Point(double x, double value) {
+    }
+
+    /** Number of points a segment is scanned at, ends included. */
+    public static final int SCAN_POINTS = SCAN + 2;
+
+    /**
+     * The scan abscissae of a segment: {@link #SCAN_POINTS} points from xa to xb, ends exact.
+     *
+     * @param xa left end
+     * @param xb right end
+     * @return the points
+     */
+    public static double[] scanPoints(double xa, double xb) {
+        double[] xs = new double[SCAN_POINTS];
+        int last = xs.length - 1;
+        for (int i = 0; i <= last; i++) {
+            xs[i] = i == last ? xb : xa + (xb - xa) * i / last;
+        }
+        return xs;
     }
 
     /**
@@ -43,25 +62,51 @@ public final class LogAxis {
         if (!(xb > xa)) {
             return new Point(xa, f.applyAsDouble(xa));
         }
-        double[] xs = new double[SCAN + 2];
-        double[] vs = new double[SCAN + 2];
-        sample(f, xa, xb, xs, vs);
+        double[] xs = scanPoints(xa, xb);
+        double[] vs = new double[xs.length];
+        for (int i = 0; i < xs.length; i++) {
+            vs[i] = f.applyAsDouble(xs[i]);
+        }
+        return minimum(f, xs, vs);
+    }
+
+    /**
+     * Minimum of a function from its values at scan points: each sampled local minimum is refined
+     * by Brent's method; an end is refined only if the function falls when moving inwards from it.
+     *
+     * @param f the function of x = ln(I)
+     * @param xs ascending scan points
+     * @param vs the function's values there
+     * @return the smallest value found and where
+     */
+    public static Point minimum(DoubleUnaryOperator f, double[] xs, double[] vs) {
+        int last = xs.length - 1;
         int best = 0;
-        for (int i = 1; i < xs.length; i++) {
+        for (int i = 1; i <= last; i++) {
             if (vs[i] < vs[best]) {
                 best = i;
             }
         }
         Point result = new Point(xs[best], vs[best]);
-        int last = xs.length - 1;
         for (int i = 0; i <= last; i++) {
             boolean belowLeft = i == 0 || vs[i] <= vs[i - 1];
             boolean belowRight = i == last || vs[i] <= vs[i + 1];
-            if (belowLeft && belowRight) {
-                // an end sample lowest among its neighbours may still hide an interior minimum next to it
-                int lo = Math.max(0, i - 1);
-                int hi = Math.min(last, i + 1);
-                Point p = refineMinimum(f, xs[lo], xs[hi], i == 0 || i == last ? 0.5 * (xs[lo] + xs[hi]) : xs[i]);
+            if (!belowLeft || !belowRight || last == 0) {
+                continue;
+            }
+            if (i == 0 || i == last) {
+                int inner = i == 0 ? 1 : last - 1;
+                double probe = xs[i] + (xs[inner] - xs[i]) * 1e-6;
+                if (!(f.applyAsDouble(probe) < vs[i])) {
+                    continue;
+                }
+                Point p = refineMinimum(f, Math.min(xs[i], xs[inner]), Math.max(xs[i], xs[inner]),
+                        0.5 * (xs[i] + xs[inner]));
+                if (p.value() < result.value()) {
+                    result = p;
+                }
+            } else {
+                Point p = refineMinimum(f, xs[i - 1], xs[i + 1], xs[i]);
                 if (p.value() < result.value()) {
                     result = p;
                 }
@@ -82,9 +127,23 @@ public final class LogAxis {
         if (!(xb > xa)) {
             return new double[0];
         }
-        double[] xs = new double[SCAN + 2];
-        double[] vs = new double[SCAN + 2];
-        sample(f, xa, xb, xs, vs);
+        double[] xs = scanPoints(xa, xb);
+        double[] vs = new double[xs.length];
+        for (int i = 0; i < xs.length; i++) {
+            vs[i] = f.applyAsDouble(xs[i]);
+        }
+        return roots(f, xs, vs);
+    }
+
+    /**
+     * Roots of a function from its values at scan points: each sign change solved.
+     *
+     * @param f the function of x = ln(I)
+     * @param xs ascending scan points
+     * @param vs the function's values there
+     * @return the roots, ascending
+     */
+    public static double[] roots(DoubleUnaryOperator f, double[] xs, double[] vs) {
         double[] found = new double[xs.length];
         int n = 0;
         for (int i = 1; i < xs.length; i++) {
@@ -100,6 +159,29 @@ public final class LogAxis {
             }
         }
         return Arrays.copyOf(found, n);
+    }
+
+    /**
+     * The single root of a monotonic function in [xa, xb], if its ends have opposite signs.
+     *
+     * @param f a monotonic function of x
+     * @param xa left end
+     * @param xb right end
+     * @return the root, or NaN if the ends do not bracket one
+     */
+    public static double monotoneRoot(DoubleUnaryOperator f, double xa, double xb) {
+        double fa = f.applyAsDouble(xa);
+        double fb = f.applyAsDouble(xb);
+        if (fa == 0.0) {
+            return xa;
+        }
+        if (fb == 0.0) {
+            return xb;
+        }
+        if (Double.isNaN(fa) || Double.isNaN(fb) || Math.signum(fa) == Math.signum(fb)) {
+            return Double.NaN;
+        }
+        return solve(f, xa, xb);
     }
 
     /** Probe distance in ln(I) for telling a pole of a curve from a finite step. */
@@ -122,22 +204,20 @@ public final class LogAxis {
         return near > 100 * time.applyAsDouble(x + DIVERGENCE_PROBE);
     }
 
-    private static void sample(DoubleUnaryOperator f, double xa, double xb, double[] xs, double[] vs) {
-        int last = xs.length - 1;
-        for (int i = 0; i <= last; i++) {
-            xs[i] = i == last ? xb : xa + (xb - xa) * i / last;
-            vs[i] = f.applyAsDouble(xs[i]);
-        }
-    }
-
     private static Point refineMinimum(DoubleUnaryOperator f, double lo, double hi, double start) {
-        BrentOptimizer optimizer = new BrentOptimizer(1e-13, X_ACCURACY);
+        if (!(hi - lo > X_ACCURACY)) {
+            return new Point(start, f.applyAsDouble(start));
+        }
+        BrentOptimizer optimizer = new BrentOptimizer(1e-10, X_ACCURACY);
         UnivariatePointValuePair p = optimizer.optimize(new MaxEval(MAX_EVALUATIONS),
                 new UnivariateObjectiveFunction(f::applyAsDouble), GoalType.MINIMIZE, new SearchInterval(lo, hi, start));
         return new Point(p.getPoint(), p.getValue());
     }
 
     private static double solve(DoubleUnaryOperator f, double lo, double hi) {
+        if (!(hi - lo > X_ACCURACY)) {
+            return 0.5 * (lo + hi);
+        }
         double fl = f.applyAsDouble(lo);
         double fh = f.applyAsDouble(hi);
         if (Double.isInfinite(fl) || Double.isInfinite(fh)) {

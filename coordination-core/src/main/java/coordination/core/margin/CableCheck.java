@@ -41,6 +41,7 @@ public final class CableCheck {
     private final DcOffset dcOffset;
     private final TimeCurrentCurve curve;
     private final double letThrough;
+    private final double adiabaticI2t;
     private final CableCheckResult result;
 
     /**
@@ -71,6 +72,7 @@ public final class CableCheck {
         this.curve = device.maximumCurve();
         OptionalDouble i2t = device.clearingI2tA2s();
         this.letThrough = i2t.isPresent() ? i2t.getAsDouble() : Double.NaN;
+        this.adiabaticI2t = cable.method() == ThermalMethod.NON_ADIABATIC ? Double.NaN : cable.i2tA2s();
         this.result = compute();
     }
 
@@ -125,6 +127,11 @@ public final class CableCheck {
         return t;
     }
 
+    // the cable's damage time with k²S² computed once per check
+    private double cableSeconds(double amps) {
+        return Double.isNaN(adiabaticI2t) ? cable.damageSeconds(amps) : adiabaticI2t / (amps * amps);
+    }
+
     private CableCheckResult compute() {
         double[] points = splitPoints();
         Extremes ex = new Extremes();
@@ -154,7 +161,9 @@ public final class CableCheck {
                 continue;
             }
             addRegion(regions, a, b, method(tMid));
-            if (divergesAt(xa)) {
+            // a pole can only sit where the device starts to operate: at the range start or after a gap
+            boolean afterGap = i == 0 || prevRatioLog == Double.NEGATIVE_INFINITY;
+            if (afterGap && divergesAt(xa)) {
                 // an inverse stage's asymptote at its pickup: the margin has no lower bound there
                 ex.unbounded(a, i == 0 ? Side.AT : Side.ABOVE);
                 if (i == 0 && Double.isInfinite(deviceSeconds(a))) {
@@ -162,27 +171,35 @@ public final class CableCheck {
                 }
                 xa = Math.min(xb, xa + LogAxis.DIVERGENCE_PROBE);
             }
-            double leftRatioLog = logRatio(xa);
-            if (i > 0 && !Double.isNaN(prevRatioLog) && crosses(prevRatioLog, leftRatioLog)) {
+            double[] xs = LogAxis.scanPoints(xa, xb);
+            double[] margins = new double[xs.length];
+            double[] ratios = new double[xs.length];
+            for (int k = 0; k < xs.length; k++) {
+                double amps = Math.exp(xs[k]);
+                double te = equivalentSeconds(amps);
+                double tc = cableSeconds(amps);
+                margins[k] = tc - te;
+                ratios[k] = te == 0.0 ? Double.POSITIVE_INFINITY : Math.log(tc / te);
+            }
+            if (i > 0 && !Double.isNaN(prevRatioLog) && crosses(prevRatioLog, ratios[0])) {
                 crossings.add(a);
             }
             // minimum time margin and minimum ratio on this smooth segment
-            LogAxis.Point margin = LogAxis.minimum(this::margin, xa, xb);
-            ex.margin(margin, a, b, xa, xb, i == 0, i + 2 == points.length || points.length == 1);
-            LogAxis.Point ratio = LogAxis.minimum(this::logRatio, xa, xb);
-            ex.ratio(ratio, a, b, xa, xb, i == 0, i + 2 == points.length || points.length == 1);
-            for (double root : LogAxis.roots(this::logRatio, xa, xb)) {
+            boolean last = i + 2 == points.length || points.length == 1;
+            ex.margin(LogAxis.minimum(this::margin, xs, margins), a, b, xa, xb, i == 0, last);
+            ex.ratio(LogAxis.minimum(this::logRatio, xs, ratios), a, b, xa, xb, i == 0, last);
+            for (double root : LogAxis.roots(this::logRatio, xs, ratios)) {
                 double amps = Math.exp(root);
                 if (amps > fromAmps && amps < toAmps) {
                     crossings.add(amps);
                 }
             }
-            prevRatioLog = logRatio(xb);
+            prevRatioLog = ratios[ratios.length - 1];
             if (points.length == 1) {
                 break;
             }
         }
-        double[] c = crossings.stream().mapToDouble(Double::doubleValue).sorted().distinct().toArray();
+        double[] c = sortedDistinct(crossings);
         boolean clearsEverywhere = Double.isNaN(ex.notClearedFrom) && Double.isNaN(ex.undefinedFrom);
         boolean pass = clearsEverywhere && !Double.isNaN(ex.minMargin)
                 && requirement.isMetBy(ex.minMargin, Math.exp(ex.minLogRatio));
@@ -195,23 +212,37 @@ public final class CableCheck {
         return LogAxis.divergesAt(v -> deviceSeconds(Math.exp(v)), x);
     }
 
+    static double[] sortedDistinct(List<Double> values) {
+        double[] v = new double[values.size()];
+        for (int k = 0; k < v.length; k++) {
+            v[k] = values.get(k);
+        }
+        Arrays.sort(v);
+        int n = 0;
+        for (int k = 0; k < v.length; k++) {
+            if (n == 0 || v[k] != v[n - 1]) {
+                v[n++] = v[k];
+            }
+        }
+        return n == v.length ? v : Arrays.copyOf(v, n);
+    }
+
     private static boolean crosses(double before, double after) {
         return before < 0 && after > 0 || before > 0 && after < 0;
     }
 
     private double margin(double x) {
         double amps = Math.exp(x);
-        return cable.damageSeconds(amps) - equivalentSeconds(amps);
+        return cableSeconds(amps) - equivalentSeconds(amps);
     }
 
     private double logRatio(double x) {
         double amps = Math.exp(x);
         double te = equivalentSeconds(amps);
-        double tc = cable.damageSeconds(amps);
         if (te == 0.0) {
             return Double.POSITIVE_INFINITY;
         }
-        return Math.log(tc) - Math.log(te);
+        return Math.log(cableSeconds(amps) / te);
     }
 
     private String method(double deviceSeconds) {
@@ -264,13 +295,13 @@ public final class CableCheck {
             if (!(xb > xa) || Double.isNaN(deviceSeconds(Math.exp(0.5 * (xa + xb))))) {
                 continue;
             }
+            // the clearing time never rises with current, so each limit is passed at most once per segment
             for (double limit : new double[] {CableThermalLimit.ADIABATIC_MIN_SECONDS,
                 CableThermalLimit.ADIABATIC_MAX_SECONDS}) {
                 double logLimit = Math.log(limit);
-                for (double r : LogAxis.roots(x -> Math.log(deviceSeconds(Math.exp(x))) - logLimit, xa, xb)) {
-                    if (m < edges.length) {
-                        edges[m++] = Math.exp(r);
-                    }
+                double r = LogAxis.monotoneRoot(x -> Math.log(deviceSeconds(Math.exp(x))) - logLimit, xa, xb);
+                if (!Double.isNaN(r) && m < edges.length) {
+                    edges[m++] = Math.exp(r);
                 }
             }
         }

@@ -129,7 +129,8 @@ public final class GradingCheck {
                 prevLog = Double.NEGATIVE_INFINITY;
                 continue;
             }
-            if (LogAxis.divergesAt(v -> time(down, Math.exp(v)), xa)) {
+            boolean afterGap = first || prevLog == Double.NEGATIVE_INFINITY || Double.isNaN(prevLog);
+            if (afterGap && LogAxis.divergesAt(v -> time(down, Math.exp(v)), xa)) {
                 // the downstream curve's asymptote at its pickup: the interval has no lower bound there
                 if (!(minInterval == Double.NEGATIVE_INFINITY)) {
                     minInterval = Double.NEGATIVE_INFINITY;
@@ -138,11 +139,21 @@ public final class GradingCheck {
                 }
                 xa = Math.min(xb, xa + LogAxis.DIVERGENCE_PROBE);
             }
-            double leftLog = logRatio(xa);
+            double[] xs = LogAxis.scanPoints(xa, xb);
+            double[] intervals = new double[xs.length];
+            double[] logs = new double[xs.length];
+            for (int k = 0; k < xs.length; k++) {
+                double amps = Math.exp(xs[k]);
+                double tu = time(up, amps);
+                double td = time(down, amps);
+                intervals[k] = tu - td;
+                logs[k] = Math.log(tu) - Math.log(td);
+            }
+            double leftLog = logs[0];
             if (!first && !Double.isNaN(prevLog) && (prevLog < 0 && leftLog > 0 || prevLog > 0 && leftLog < 0)) {
                 crossings.add(a);
             }
-            LogAxis.Point p = LogAxis.minimum(this::interval, xa, xb);
+            LogAxis.Point p = LogAxis.minimum(this::interval, xs, intervals);
             if (Double.isNaN(minInterval) || p.value() < minInterval) {
                 minInterval = p.value();
                 if (p.x() <= xa) {
@@ -156,13 +167,13 @@ public final class GradingCheck {
                     minSide = Side.AT;
                 }
             }
-            for (double r : LogAxis.roots(this::logRatio, xa, xb)) {
+            for (double r : LogAxis.roots(this::logRatio, xs, logs)) {
                 double amps = Math.exp(r);
                 if (amps > fromAmps && amps < toAmps) {
                     crossings.add(amps);
                 }
             }
-            prevLog = logRatio(xb);
+            prevLog = logs[logs.length - 1];
         }
         double ratio = upstream instanceof Fuse fu && downstream instanceof Fuse fd
                 ? fu.ratingAmps() / fd.ratingAmps() : Double.NaN;
@@ -175,7 +186,7 @@ public final class GradingCheck {
         } else {
             pass = defined && minInterval > 0;
         }
-        double[] c = crossings.stream().mapToDouble(Double::doubleValue).sorted().distinct().toArray();
+        double[] c = CableCheck.sortedDistinct(crossings);
         return new GradingCheckResult(upstream.id(), downstream.id(), fromAmps, toAmps, requirement, pass, minInterval,
                 minAt, minSide, c, ratio, undefinedFrom, undefinedTo);
     }

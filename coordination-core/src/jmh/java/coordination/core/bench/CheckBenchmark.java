@@ -1,0 +1,74 @@
+package coordination.core.bench;
+
+import coordination.core.cable.CableThermalLimit;
+import coordination.core.cable.ConductorMaterial;
+import coordination.core.cable.Insulation;
+import coordination.core.curve.DefiniteTimeStage;
+import coordination.core.curve.InverseTimeFamily;
+import coordination.core.curve.InverseTimeStage;
+import coordination.core.curve.Relay;
+import coordination.core.curve.TimeCurrentCurve;
+import coordination.core.margin.CableCheck;
+import coordination.core.margin.CableCheckResult;
+import coordination.core.margin.GradingCheck;
+import coordination.core.margin.GradingCheckResult;
+import coordination.core.margin.GradingRequirement;
+import coordination.core.margin.MarginRequirement;
+import java.util.List;
+import java.util.concurrent.TimeUnit;
+import org.openjdk.jmh.annotations.Benchmark;
+import org.openjdk.jmh.annotations.BenchmarkMode;
+import org.openjdk.jmh.annotations.Mode;
+import org.openjdk.jmh.annotations.OutputTimeUnit;
+import org.openjdk.jmh.annotations.Scope;
+import org.openjdk.jmh.annotations.State;
+
+/** One cable check and one grading check, and a 10,000-point sampling check for comparison. */
+@State(Scope.Benchmark)
+@BenchmarkMode(Mode.Throughput)
+@OutputTimeUnit(TimeUnit.SECONDS)
+public class CheckBenchmark {
+    private final CableThermalLimit cable = CableThermalLimit.of("C", ConductorMaterial.COPPER, Insulation.XLPE, 70, 1);
+    private final Relay feeder = new Relay("F7", List.of(
+            InverseTimeStage.of(InverseTimeFamily.IEC_STANDARD_INVERSE, 250, 0.2),
+            DefiniteTimeStage.definiteTime(3000, 0.1), DefiniteTimeStage.instantaneous(10000, 0.0)), 1, 0.05);
+    private final Relay incomer = new Relay("F0", List.of(
+            InverseTimeStage.of(InverseTimeFamily.IEC_STANDARD_INVERSE, 600, 0.3),
+            DefiniteTimeStage.definiteTime(8000, 0.5)), 1, 0.05);
+
+    /** @return the exact cable check */
+    @Benchmark
+    public CableCheckResult cableCheck() {
+        return CableCheck.check(feeder, cable, 1500, 12000, MarginRequirement.seconds(0.1));
+    }
+
+    /** @return the exact grading check */
+    @Benchmark
+    public GradingCheckResult gradingCheck() {
+        return GradingCheck.check(incomer, feeder, 1500, 6000, GradingRequirement.intervalSeconds(0.3));
+    }
+
+    /** @return the minimum margin found by sampling 10,000 log-spaced currents */
+    @Benchmark
+    public double sampledCableCheck10k() {
+        TimeCurrentCurve c = feeder.maximumCurve();
+        double min = Double.POSITIVE_INFINITY;
+        double minRatio = Double.POSITIVE_INFINITY;
+        int crossings = 0;
+        double prev = Double.NaN;
+        int n = 10_000;
+        for (int i = 0; i < n; i++) {
+            double amps = 1500 * Math.pow(8.0, (double) i / (n - 1));
+            double td = c.seconds(amps);
+            double tc = cable.damageSeconds(amps);
+            min = Math.min(min, tc - td);
+            minRatio = Math.min(minRatio, tc / td);
+            double s = tc - td;
+            if (!Double.isNaN(prev) && (prev < 0) != (s < 0)) {
+                crossings++;
+            }
+            prev = s;
+        }
+        return min + minRatio + crossings;
+    }
+}

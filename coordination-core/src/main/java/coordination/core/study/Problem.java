@@ -1,0 +1,19 @@
+package coordination.core.study;
+
+/**
+ * One problem in a study file.
+ *
+ * @param file the file as the user named it
+ * @param line 1-based line
+ * @param column 1-based column
+ * @param path the key path, e.g. {@code devices[2].stages[0].pickup_a}, or empty for the document
+ * @param message what is wrong, with the value found and the rule
+ */
+public record Problem(String file, int line, int column, String path, String message) {
+
+    /** @return the problem as {@code FILE:LINE:COLUMN: path: message} */
+    @Override
+    public String toString() {
+        return file + ":" + line + ":" + column + ": " + (path.isEmpty() ? "" : path + ": ") + message;
+    }
+}

@@ -1,0 +1,177 @@
+package coordination.core.study;
+
+import com.fasterxml.jackson.core.JsonLocation;
+import com.fasterxml.jackson.core.JsonProcessingException;
+import com.fasterxml.jackson.core.JsonToken;
+import com.fasterxml.jackson.core.StreamReadConstraints;
+import com.fasterxml.jackson.dataformat.yaml.YAMLFactory;
+import com.fasterxml.jackson.dataformat.yaml.YAMLParser;
+import java.io.IOException;
+import java.util.ArrayList;
+import java.util.LinkedHashMap;
+import java.util.List;
+import org.yaml.snakeyaml.LoaderOptions;
+
+/**
+ * Reads YAML text into located {@link Node}s. Syntax, duplicate keys, anchors and aliases are
+ * found here, before any binding, so that their locations are exact and a binding error cannot hide
+ * them.
+ */
+final class YamlTreeReader {
+    /** Deeper than any study needs (a study nests about six levels). */
+    static final int MAX_DEPTH = 40;
+
+    private final String file;
+    private final List<Problem> problems;
+    private YAMLParser parser;
+    private int depth;
+
+    YamlTreeReader(String file, List<Problem> problems) {
+        this.file = file;
+        this.problems = problems;
+    }
+
+    private static YAMLFactory factory() {
+        LoaderOptions options = new LoaderOptions();
+        options.setNestingDepthLimit(MAX_DEPTH + 10);
+        options.setMaxAliasesForCollections(10);
+        options.setAllowDuplicateKeys(true);
+        return YAMLFactory.builder()
+                .loaderOptions(options)
+                .streamReadConstraints(StreamReadConstraints.builder().maxNestingDepth(MAX_DEPTH + 10)
+                        .maxStringLength(100_000).maxNumberLength(100).build())
+                .build();
+    }
+
+    private static final YAMLFactory FACTORY = factory();
+
+    /**
+     * Parses a document.
+     *
+     * @param text the file's text
+     * @return the root node, or null if the document could not be parsed (problems then say why)
+     */
+    Node read(String text) {
+        try (YAMLParser p = (YAMLParser) FACTORY.createParser(text)) {
+            parser = p;
+            JsonToken t = p.nextToken();
+            if (t == null) {
+                problems.add(new Problem(file, 1, 1, "", "the file is empty - a study needs at least format, title,"
+                        + " voltage_kv, cables, devices and checks"));
+                return null;
+            }
+            Node root = node(t, "");
+            if (root != null && p.nextToken() != null) {
+                JsonLocation l = p.currentTokenLocation();
+                problems.add(new Problem(file, l.getLineNr(), l.getColumnNr(), "",
+                        "more than one YAML document - a study file holds one"));
+            }
+            return root;
+        } catch (JsonProcessingException e) {
+            JsonLocation l = e.getLocation();
+            int line = l == null ? 1 : Math.max(1, l.getLineNr());
+            int col = l == null ? 1 : Math.max(1, l.getColumnNr());
+            problems.add(new Problem(file, line, col, "", "not valid YAML: " + oneLine(e.getOriginalMessage())));
+            return null;
+        } catch (DepthExceeded e) {
+            return null;
+        } catch (IOException | RuntimeException e) {
+            JsonLocation l = parser == null ? null : parser.currentLocation();
+            int line = l == null ? 1 : Math.max(1, l.getLineNr());
+            int col = l == null ? 1 : Math.max(1, l.getColumnNr());
+            problems.add(new Problem(file, line, col, "", "not valid YAML: " + oneLine(String.valueOf(e.getMessage()))));
+            return null;
+        }
+    }
+
+    static String oneLine(String message) {
+        String m = message == null ? "" : message.strip();
+        int nl = m.indexOf('\n');
+        if (nl >= 0) {
+            m = m.substring(0, nl).strip();
+        }
+        if (m.length() > 200) {
+            m = m.substring(0, 200) + "...";
+        }
+        return m.isEmpty() ? "unreadable" : m;
+    }
+
+    private Node node(JsonToken t, String path) throws IOException {
+        JsonLocation l = parser.currentTokenLocation();
+        int line = l.getLineNr();
+        int col = l.getColumnNr();
+        if (parser.isCurrentAlias()) {
+            problems.add(new Problem(file, line, col, path, "YAML aliases (*" + parser.getText()
+                    + ") are not allowed in a study file - write the value out"));
+            return null;
+        }
+        String anchor = parser.getObjectId();
+        if (anchor != null) {
+            problems.add(new Problem(file, line, col, path, "YAML anchors (&" + anchor
+                    + ") are not allowed in a study file - write each value out"));
+        }
+        switch (t) {
+            case START_OBJECT:
+                return map(line, col, path);
+            case START_ARRAY:
+                return list(line, col, path);
+            case VALUE_NUMBER_INT:
+            case VALUE_NUMBER_FLOAT:
+                return new Node.Scalar(line, col, parser.getText(), Node.ScalarType.NUMBER, parser.getDoubleValue());
+            case VALUE_TRUE:
+            case VALUE_FALSE:
+                return new Node.Scalar(line, col, parser.getText(), Node.ScalarType.BOOLEAN, Double.NaN);
+            case VALUE_NULL:
+                return new Node.Scalar(line, col, "", Node.ScalarType.NULL, Double.NaN);
+            default:
+                return new Node.Scalar(line, col, parser.getText(), Node.ScalarType.STRING, Double.NaN);
+        }
+    }
+
+    private Node map(int line, int col, String path) throws IOException {
+        if (++depth > MAX_DEPTH) {
+            problems.add(new Problem(file, line, col, path, "nested deeper than " + MAX_DEPTH + " levels"));
+            throw new DepthExceeded();
+        }
+        LinkedHashMap<String, Node.Entry> entries = new LinkedHashMap<>();
+        JsonToken t;
+        while ((t = parser.nextToken()) == JsonToken.FIELD_NAME) {
+            String key = parser.currentName();
+            JsonLocation kl = parser.currentTokenLocation();
+            String childPath = path.isEmpty() ? key : path + "." + key;
+            Node value = node(parser.nextToken(), childPath);
+            if (entries.containsKey(key)) {
+                Node.Entry first = entries.get(key);
+                problems.add(new Problem(file, kl.getLineNr(), kl.getColumnNr(), childPath,
+                        "duplicate key - already given at line " + first.line()));
+            } else {
+                entries.put(key, new Node.Entry(key, kl.getLineNr(), kl.getColumnNr(), value));
+            }
+        }
+        depth--;
+        return new Node.MapNode(line, col, entries);
+    }
+
+    private Node list(int line, int col, String path) throws IOException {
+        if (++depth > MAX_DEPTH) {
+            problems.add(new Problem(file, line, col, path, "nested deeper than " + MAX_DEPTH + " levels"));
+            throw new DepthExceeded();
+        }
+        List<Node> items = new ArrayList<>();
+        JsonToken t;
+        while ((t = parser.nextToken()) != JsonToken.END_ARRAY && t != null) {
+            items.add(node(t, path + "[" + items.size() + "]"));
+        }
+        depth--;
+        return new Node.ListNode(line, col, items);
+    }
+
+    /** Stops a too-deep document at the first level too many; its problem is already recorded. */
+    private static final class DepthExceeded extends RuntimeException {
+        private static final long serialVersionUID = 1L;
+
+        DepthExceeded() {
+            super("nested too deep", null, false, false);
+        }
+    }
+}
