@@ -625,16 +625,21 @@ public final class StudyReader {
     }
 
     private ProtectiveDevice mcb(Node.MapNode m, String path, String id, List<String> settings) {
-        b.allowOnly(m, path, "id", "type", "voltage_kv", "curve_type", "rating_a", "fastest_s");
+        b.allowOnly(m, path, "id", "type", "voltage_kv", "curve_type", "rating_a", "fastest_s", "let_through_i2t_a2s");
         String t = b.choice(m, path, "curve_type", true, null, List.of("B", "C", "D"));
         double rating = b.number(m, path, "rating_a", true, Double.NaN, 0, true, 125, "A");
         double fastest = b.number(m, path, "fastest_s", false, MiniatureBreaker.DEFAULT_FASTEST_SECONDS, 0, false, 0.1,
                 "s");
-        if (t == null || Double.isNaN(rating) || Double.isNaN(fastest) || id == null) {
+        double i2t = b.number(m, path, "let_through_i2t_a2s", false, Double.NaN, 0, true, 1e9, "A2s");
+        if (t == null || Double.isNaN(rating) || Double.isNaN(fastest) || id == null
+                || b.has(m, "let_through_i2t_a2s") && Double.isNaN(i2t)) {
             return null;
         }
         settings.add("type " + t + ", In " + Checks.format(rating) + " A (IEC 60898-1)");
-        return new MiniatureBreaker(id, McbType.valueOf(t), rating, fastest);
+        if (!Double.isNaN(i2t)) {
+            settings.add("let-through I²t " + Checks.format(i2t) + " A²s");
+        }
+        return new MiniatureBreaker(id, McbType.valueOf(t), rating, fastest, i2t);
     }
 
     // ---------------------------------------------------------------------------------------- checks

@@ -1,0 +1,116 @@
+package coordination.plot.chart;
+
+import java.awt.BasicStroke;
+import java.awt.Color;
+import java.awt.Font;
+import java.awt.GraphicsEnvironment;
+import java.util.Arrays;
+
+/**
+ * The project's drawing style. Device colours are taken from the colour-blind-safe set of Okabe and
+ * Ito ("Color Universal Design", 2008), each paired with its own dash pattern so that curves stay
+ * apart printed in grey. Cables are black; damaged regions a light warm grey.
+ */
+public final class Palette {
+    private static final Color[] DEVICE = {
+        new Color(0x00, 0x72, 0xB2), // blue
+        new Color(0xD5, 0x5E, 0x00), // vermilion
+        new Color(0x00, 0x9E, 0x73), // bluish green
+        new Color(0xCC, 0x79, 0xA7), // reddish purple
+        new Color(0xE6, 0x9F, 0x00), // orange
+        new Color(0x56, 0xB4, 0xE9), // sky blue
+    };
+    private static final float[][] DASHES = {
+        null, {9f, 3f}, {2f, 2.5f}, {9f, 3f, 2f, 3f}, {5f, 5f}, {12f, 3f, 2f, 3f, 2f, 3f},
+    };
+
+    /** Cable damage curves. */
+    public static final Color CABLE = new Color(0x1A, 0x1A, 0x1A);
+    private static final Color[] CABLES = {CABLE, new Color(0x66, 0x66, 0x66), new Color(0x8B, 0x4A, 0x2B)};
+
+    /** Region above a damage curve. */
+    public static final Color DAMAGED = new Color(0x99, 0x88, 0x77, 0x30);
+    /** Grid lines. */
+    public static final Color GRID = new Color(0xDD, 0xDD, 0xDD);
+    /** Fault-current markers and annotations. */
+    public static final Color MARK = new Color(0x44, 0x44, 0x44);
+    /** Text of passing verdicts. */
+    public static final Color PASS = new Color(0x00, 0x6D, 0x4F);
+    /** Text of failing verdicts. */
+    public static final Color FAIL = new Color(0xB0, 0x3A, 0x00);
+    /** The font family used throughout, the same on every machine that has it. */
+    public static final String FONT_FAMILY = fontFamily();
+
+    private Palette() {
+    }
+
+    private static String fontFamily() {
+        String[] names = GraphicsEnvironment.getLocalGraphicsEnvironment().getAvailableFontFamilyNames(java.util.Locale.ROOT);
+        return Arrays.asList(names).contains("DejaVu Sans") ? "DejaVu Sans" : Font.SANS_SERIF;
+    }
+
+    /**
+     * A font of the house family.
+     *
+     * @param style {@link Font#PLAIN} or {@link Font#BOLD}
+     * @param size size in points
+     * @return the font
+     */
+    public static Font font(int style, float size) {
+        return new Font(FONT_FAMILY, style, 1).deriveFont(size);
+    }
+
+    /**
+     * The colour of the n-th device of a chart.
+     *
+     * @param n index from 0
+     * @return the colour
+     */
+    public static Color device(int n) {
+        return DEVICE[n % DEVICE.length];
+    }
+
+    /**
+     * The colour of the n-th cable of a chart: black, then dark grey, then brown.
+     *
+     * @param n index from 0
+     * @return the colour
+     */
+    public static Color cable(int n) {
+        return CABLES[n % CABLES.length];
+    }
+
+    /**
+     * The same colour, lightened for a tolerance band.
+     *
+     * @param n index from 0
+     * @return a translucent colour
+     */
+    public static Color band(int n) {
+        Color c = device(n);
+        return new Color(c.getRed(), c.getGreen(), c.getBlue(), 0x38);
+    }
+
+    /**
+     * The line style of the n-th device: colour and dash pattern change together.
+     *
+     * @param n index from 0
+     * @param width line width in points
+     * @return the stroke
+     */
+    public static BasicStroke deviceStroke(int n, float width) {
+        float[] dash = DASHES[n % DASHES.length];
+        return dash == null ? new BasicStroke(width, BasicStroke.CAP_BUTT, BasicStroke.JOIN_ROUND)
+                : new BasicStroke(width, BasicStroke.CAP_BUTT, BasicStroke.JOIN_ROUND, 10f, dash, 0f);
+    }
+
+    /**
+     * The dashed style of cable limits outside the adiabatic window.
+     *
+     * @param width line width in points
+     * @return the stroke
+     */
+    public static BasicStroke dashed(float width) {
+        return new BasicStroke(width, BasicStroke.CAP_BUTT, BasicStroke.JOIN_ROUND, 10f, new float[] {4f, 3f}, 0f);
+    }
+}

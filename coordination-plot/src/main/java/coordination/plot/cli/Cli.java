@@ -1,0 +1,102 @@
+package coordination.plot.cli;
+
+import java.io.PrintStream;
+import java.io.PrintWriter;
+import java.nio.charset.StandardCharsets;
+import picocli.CommandLine;
+import picocli.CommandLine.Command;
+
+/** The {@code coordination} command and its entry point. */
+@Command(name = "coordination", mixinStandardHelpOptions = true, versionProvider = Cli.Version.class,
+        description = "Checks that protective devices protect their cables and grade with each other,"
+                + " and draws coordination sheets.",
+        subcommands = {SheetCommand.class, CheckCommand.class, WithstandCommand.class},
+        exitCodeOnInvalidInput = ExitCodes.BAD_INPUT, exitCodeOnExecutionException = ExitCodes.BAD_INPUT)
+public final class Cli implements Runnable {
+    private final PrintStream out;
+    private final PrintStream err;
+
+    /**
+     * A command writing to the given streams.
+     *
+     * @param out standard output
+     * @param err standard error
+     */
+    public Cli(PrintStream out, PrintStream err) {
+        this.out = out;
+        this.err = err;
+    }
+
+    @Override
+    public void run() {
+        out.println(new CommandLine(this).getUsageMessage());
+    }
+
+    /**
+     * Runs the command line in-process.
+     *
+     * @param out standard output
+     * @param err standard error
+     * @param args the arguments
+     * @return the exit code
+     */
+    public static int run(PrintStream out, PrintStream err, String... args) {
+        Cli cli = new Cli(out, err);
+        CommandLine cl = new CommandLine(cli, new Factory(out, err));
+        cl.setOut(new PrintWriter(out, true, StandardCharsets.UTF_8));
+        cl.setErr(new PrintWriter(err, true, StandardCharsets.UTF_8));
+        cl.setParameterExceptionHandler((ex, a) -> {
+            err.println("coordination: " + ex.getMessage());
+            err.println("run 'coordination " + (ex.getCommandLine().getCommandName().equals("coordination") ? ""
+                    : ex.getCommandLine().getCommandName() + " ") + "--help' for usage");
+            return ExitCodes.BAD_INPUT;
+        });
+        cl.setExecutionExceptionHandler((ex, c, p) -> {
+            // a defect, not a user mistake: one line, and the trace only when asked for
+            err.println("coordination: internal error: " + ex);
+            if (System.getenv("COORDINATION_DEBUG") != null) {
+                ex.printStackTrace(err);
+            }
+            return ExitCodes.BAD_INPUT;
+        });
+        return cl.execute(args);
+    }
+
+    /**
+     * Entry point of the runnable jar.
+     *
+     * @param args the arguments
+     */
+    public static void main(String[] args) {
+        System.setProperty("java.awt.headless", "true");
+        PrintStream out = new PrintStream(new java.io.FileOutputStream(java.io.FileDescriptor.out), true,
+                StandardCharsets.UTF_8);
+        System.exit(run(out, System.err, args));
+    }
+
+    /** Builds subcommands with the injected streams. */
+    private record Factory(PrintStream out, PrintStream err) implements CommandLine.IFactory {
+        @Override
+        public <K> K create(Class<K> cls) throws Exception {
+            if (cls == SheetCommand.class) {
+                return cls.cast(new SheetCommand(out, err));
+            }
+            if (cls == CheckCommand.class) {
+                return cls.cast(new CheckCommand(out, err));
+            }
+            if (cls == WithstandCommand.class) {
+                return cls.cast(new WithstandCommand(out, err));
+            }
+            return CommandLine.defaultFactory().create(cls);
+        }
+    }
+
+    /** The version from the jar's manifest. */
+    static final class Version implements CommandLine.IVersionProvider {
+        @Override
+        public String[] getVersion() {
+            String v = Cli.class.getPackage().getImplementationVersion();
+            return new String[] {"coordination " + (v == null ? "development build" : v)};
+        }
+    }
+}

@@ -1,0 +1,371 @@
+package coordination.plot.sheet;
+
+import coordination.core.cable.CableThermalLimit;
+import coordination.core.internal.Checks;
+import coordination.core.margin.CableCheckResult;
+import coordination.core.margin.GradingCheckResult;
+import coordination.core.study.Study;
+import coordination.core.study.StudyReport;
+import coordination.plot.chart.ChartContent;
+import coordination.plot.chart.Palette;
+import coordination.plot.chart.TimeCurrentChart;
+import java.awt.BasicStroke;
+import java.awt.Color;
+import java.awt.Font;
+import java.awt.FontMetrics;
+import java.awt.Graphics2D;
+import java.awt.geom.AffineTransform;
+import java.awt.geom.Line2D;
+import java.awt.geom.Rectangle2D;
+import java.io.IOException;
+import java.util.ArrayList;
+import java.util.List;
+
+/**
+ * A coordination sheet: one landscape page with a title block taken from the study (never from
+ * the clock), the time-current chart, the device settings, the cable data, the results of every
+ * check and a caution in the footer.
+ */
+public final class CoordinationSheet {
+    /** The caution printed on every sheet and in the README. */
+    public static final String CAUTION = "Caution: these results support engineering judgement and do not replace"
+            + " it. Check them against the local codes that apply and have the study reviewed by a qualified,"
+            + " licensed engineer before relying on it.";
+
+    private static final double MM_TO_PT = 72.0 / 25.4;
+    private static final double MARGIN = 22;
+
+    private final Study study;
+    private final StudyReport report;
+    private final double width;
+    private final double height;
+
+    /**
+     * Creates the sheet of an evaluated study.
+     *
+     * @param study the study
+     * @param report its report
+     */
+    public CoordinationSheet(Study study, StudyReport report) {
+        this.study = study;
+        this.report = report;
+        this.width = Math.round(study.page().widthMm() * MM_TO_PT);
+        this.height = Math.round(study.page().heightMm() * MM_TO_PT);
+    }
+
+    /** @return page width in points */
+    public double widthPoints() {
+        return width;
+    }
+
+    /** @return page height in points */
+    public double heightPoints() {
+        return height;
+    }
+
+    /**
+     * Renders the sheet.
+     *
+     * @param format file format
+     * @param dpi PNG resolution in dots per inch
+     * @return the file's bytes
+     * @throws IOException if encoding fails
+     */
+    public byte[] render(OutputFormat format, int dpi) throws IOException {
+        return Drawing.render(format, width, height, dpi, this::paint);
+    }
+
+    /**
+     * Paints the sheet on a Graphics2D whose unit is one point.
+     *
+     * @param g the graphics
+     */
+    public void paint(Graphics2D g) {
+        g.setColor(Color.WHITE);
+        g.fill(new Rectangle2D.Double(0, 0, width, height));
+        g.setColor(Palette.MARK);
+        g.setStroke(new BasicStroke(0.8f));
+        g.draw(new Rectangle2D.Double(MARGIN / 2, MARGIN / 2, width - MARGIN, height - MARGIN));
+        double top = titleBlock(g);
+        double footerTop = height - MARGIN - 22;
+        double chartW = Math.round((width - 2 * MARGIN) * 0.58);
+        double resultsH = Math.min(130, 28 + 11 * Math.max(1, report.order().size()));
+        double chartBottom = footerTop - resultsH - 6;
+        double chartH = chartBottom - top - 4;
+        chart(g, MARGIN, top + 4, chartW, chartH);
+        double rightX = MARGIN + chartW + 12;
+        double rightW = width - MARGIN - rightX;
+        double y = devicesTable(g, rightX, top + 4, rightW, top + 4 + chartH * 0.52);
+        cablesTable(g, rightX, y + 6, rightW, chartBottom);
+        resultsTable(g, MARGIN, chartBottom + 4, width - 2 * MARGIN, footerTop - 4);
+        footer(g, footerTop);
+    }
+
+    private double titleBlock(Graphics2D g) {
+        double x = MARGIN;
+        double y = MARGIN;
+        g.setColor(Color.BLACK);
+        g.setFont(Palette.font(Font.BOLD, 13f));
+        text(g, fit(g, study.title(), width - 2 * MARGIN - 150), x, y + 12);
+        g.setFont(Palette.font(Font.PLAIN, 8f));
+        List<String> facts = new ArrayList<>();
+        facts.add("reference " + Checks.format(study.voltageKv()) + " kV");
+        facts.add(Checks.format(study.frequencyHz()) + " Hz");
+        if (!study.revision().isEmpty()) {
+            facts.add("revision " + study.revision());
+        }
+        if (!study.date().isEmpty()) {
+            facts.add("dated " + study.date());
+        }
+        facts.add("study " + study.name());
+        text(g, String.join("   ·   ", facts), x, y + 25);
+        // verdict box, worded as well as coloured
+        boolean pass = report.pass();
+        int fails = report.failures();
+        String verdict = pass ? "ALL " + report.order().size() + " CHECKS PASS" : fails + " OF " + report.order().size()
+                + " CHECKS FAIL";
+        g.setFont(Palette.font(Font.BOLD, 10f));
+        FontMetrics fm = g.getFontMetrics();
+        double bw = fm.stringWidth(verdict) + 16;
+        double bx = width - MARGIN - bw;
+        g.setColor(pass ? Palette.PASS : Palette.FAIL);
+        g.setStroke(new BasicStroke(1.4f));
+        g.draw(new Rectangle2D.Double(bx, y, bw, 22));
+        text(g, verdict, bx + 8, y + 15);
+        g.setColor(Palette.MARK);
+        g.setStroke(new BasicStroke(0.6f));
+        g.draw(new Line2D.Double(MARGIN, y + 31, width - MARGIN, y + 31));
+        return y + 33;
+    }
+
+    private void chart(Graphics2D g, double x, double y, double w, double h) {
+        TimeCurrentChart tcc = new TimeCurrentChart(ChartContent.of(study, report), (int) w, (int) h);
+        AffineTransform saved = g.getTransform();
+        g.translate(x, y);
+        tcc.chart().paint(g, (int) w, (int) h);
+        g.setTransform(saved);
+    }
+
+    private double heading(Graphics2D g, String title, double x, double y, double w) {
+        g.setColor(Color.BLACK);
+        g.setFont(Palette.font(Font.BOLD, 8.5f));
+        text(g, title, x, y + 9);
+        g.setColor(Palette.MARK);
+        g.setStroke(new BasicStroke(0.5f));
+        g.draw(new Line2D.Double(x, y + 12, x + w, y + 12));
+        return y + 14;
+    }
+
+    private double devicesTable(Graphics2D g, double x, double y, double w, double bottom) {
+        double cy = heading(g, "Devices and settings", x, y, w);
+        g.setFont(Palette.font(Font.PLAIN, 7f));
+        int index = 0;
+        int shown = 0;
+        for (Study.StudyDevice d : study.devices()) {
+            List<String> lines = new ArrayList<>();
+            lines.add(d.id() + " (" + d.device().kind().key() + ")");
+            lines.addAll(d.settings());
+            if (cy + 9 * lines.size() > bottom) {
+                break;
+            }
+            g.setColor(Palette.device(index));
+            g.setStroke(Palette.deviceStroke(index, 1.6f));
+            g.draw(new Line2D.Double(x, cy + 5, x + 14, cy + 5));
+            g.setColor(Color.BLACK);
+            g.setFont(Palette.font(Font.BOLD, 7f));
+            text(g, fit(g, lines.get(0), w - 18), x + 18, cy + 7.5);
+            g.setFont(Palette.font(Font.PLAIN, 7f));
+            cy += 9;
+            for (int i = 1; i < lines.size(); i++) {
+                text(g, fit(g, lines.get(i), w - 18), x + 18, cy + 7.5);
+                cy += 9;
+            }
+            cy += 2;
+            index++;
+            shown++;
+        }
+        if (shown < study.devices().size()) {
+            text(g, "+ " + (study.devices().size() - shown) + " more in the report", x + 18, cy + 7.5);
+            cy += 9;
+        }
+        return cy;
+    }
+
+    private void cablesTable(Graphics2D g, double x, double y, double w, double bottom) {
+        double cy = heading(g, "Cables", x, y, w);
+        g.setFont(Palette.font(Font.PLAIN, 7f));
+        int shown = 0;
+        for (Study.StudyCable c : study.cables()) {
+            CableThermalLimit l = c.limit();
+            String[] lines = {
+                l.id(),
+                l.material().key() + ", " + l.insulation().key() + ", " + (l.parallel() > 1 ? l.parallel() + " x " : "")
+                    + c.sizeText() + ", " + l.method().key(),
+                "k " + String.format(java.util.Locale.ROOT, "%.1f", l.k()) + ", " + Checks.format(round(l.initialCelsius(), 1)) + " °C to "
+                    + Checks.format(l.finalCelsius()) + " °C, I²t " + engineering(l.i2tA2s()) + "A²s",
+                "withstand " + kiloamps(l.withstandAmps(0.1)) + " / " + kiloamps(l.withstandAmps(1.0)) + " / "
+                    + kiloamps(l.withstandAmps(5.0)) + " kA at 0.1 / 1 / 5 s",
+                Double.isNaN(c.faultMinAmps()) ? "" : "fault range " + kiloamps(c.faultMinAmps()) + " to "
+                    + kiloamps(c.faultMaxAmps()) + " kA",
+            };
+            if (cy + 9 * lines.length > bottom) {
+                break;
+            }
+            g.setColor(Color.BLACK);
+            g.setFont(Palette.font(Font.BOLD, 7f));
+            text(g, fit(g, lines[0], w), x, cy + 7.5);
+            g.setFont(Palette.font(Font.PLAIN, 7f));
+            cy += 9;
+            for (int i = 1; i < lines.length; i++) {
+                if (!lines[i].isEmpty()) {
+                    text(g, fit(g, lines[i], w - 8), x + 8, cy + 7.5);
+                    cy += 9;
+                }
+            }
+            cy += 2;
+            shown++;
+        }
+        if (shown < study.cables().size()) {
+            text(g, "+ " + (study.cables().size() - shown) + " more in the report", x + 8, cy + 7.5);
+        }
+    }
+
+    private void resultsTable(Graphics2D g, double x, double y, double w, double bottom) {
+        double cy = heading(g, "Checks", x, y, w);
+        double[] col = {x, x + w * 0.30, x + w * 0.49, x + w * 0.63, x + w * 0.80, x + w * 0.90};
+        String[] head = {"check", "minimum margin / interval", "at", "crossings", "required", "verdict"};
+        g.setFont(Palette.font(Font.BOLD, 7f));
+        g.setColor(Palette.MARK);
+        for (int i = 0; i < head.length; i++) {
+            text(g, head[i], col[i], cy + 7.5);
+        }
+        cy += 10;
+        int shown = 0;
+        for (Object o : report.order()) {
+            if (cy + 10 > bottom) {
+                break;
+            }
+            String[] cells;
+            boolean pass;
+            if (o instanceof CableCheckResult r) {
+                pass = r.pass();
+                cells = new String[] {r.device() + " protects " + r.cable(),
+                    Double.isNaN(r.undefinedFromAmps()) && Double.isNaN(r.notClearedFromAmps())
+                        && Double.isFinite(r.minMarginSeconds())
+                        ? seconds(r.minMarginSeconds()) + " s (ratio " + Checks.format(round(r.minRatio(), 3)) + ")"
+                        : shortReason(r.reason()),
+                    Double.isFinite(r.minMarginSeconds()) ? kiloamps(r.minMarginAtAmps()) + " kA" : "",
+                    crossings(r.crossingsAmps()), r.requirement().toString(), pass ? "pass" : "FAIL"};
+            } else {
+                GradingCheckResult r = (GradingCheckResult) o;
+                pass = r.pass();
+                cells = new String[] {r.downstream() + " grades under " + r.upstream(),
+                    Double.isFinite(r.minIntervalSeconds()) ? seconds(r.minIntervalSeconds()) + " s"
+                        : shortReason(r.reason()),
+                    Double.isFinite(r.minIntervalSeconds()) ? kiloamps(r.minIntervalAtAmps()) + " kA" : "",
+                    crossings(r.crossingsAmps()), r.requirement().toString(), pass ? "pass" : "FAIL"};
+            }
+            g.setFont(Palette.font(Font.PLAIN, 7f));
+            for (int i = 0; i < cells.length; i++) {
+                g.setColor(i == cells.length - 1 ? (pass ? Palette.PASS : Palette.FAIL) : Color.BLACK);
+                if (i == cells.length - 1) {
+                    g.setFont(Palette.font(Font.BOLD, 7f));
+                }
+                double cw = (i + 1 < col.length ? col[i + 1] : x + w) - col[i] - 4;
+                text(g, fit(g, cells[i], cw), col[i], cy + 7.5);
+            }
+            cy += 10;
+            shown++;
+        }
+        if (shown < report.order().size()) {
+            g.setColor(Color.BLACK);
+            text(g, "+ " + (report.order().size() - shown) + " more checks in the report", x, cy + 7.5);
+        }
+    }
+
+    private void footer(Graphics2D g, double y) {
+        g.setColor(Palette.MARK);
+        g.setStroke(new BasicStroke(0.5f));
+        g.draw(new Line2D.Double(MARGIN, y, width - MARGIN, y));
+        g.setFont(Palette.font(Font.PLAIN, 6.8f));
+        g.setColor(Color.BLACK);
+        List<String> lines = wrap(g, CAUTION, width - 2 * MARGIN);
+        double ly = y + 8;
+        for (String l : lines) {
+            text(g, l, MARGIN, ly);
+            ly += 8;
+        }
+    }
+
+    private static String shortReason(String reason) {
+        return reason;
+    }
+
+    private static String crossings(double[] amps) {
+        if (amps.length == 0) {
+            return "none";
+        }
+        List<String> s = new ArrayList<>();
+        for (double a : amps) {
+            s.add(kiloamps(a));
+        }
+        return String.join(", ", s) + " kA";
+    }
+
+    private static String seconds(double s) {
+        return Checks.format(round(s, 3));
+    }
+
+    private static String kiloamps(double amps) {
+        return Checks.format(round(amps / 1000, 3));
+    }
+
+    private static String engineering(double v) {
+        double e = Math.floor(Math.log10(v));
+        return Checks.format(round(v / Math.pow(10, e), 3)) + "e" + (int) e + " ";
+    }
+
+    /** Rounds to significant digits. */
+    private static double round(double v, int digits) {
+        if (v == 0 || !Double.isFinite(v)) {
+            return v;
+        }
+        double scale = Math.pow(10, digits - 1 - Math.floor(Math.log10(Math.abs(v))));
+        return Math.round(v * scale) / scale;
+    }
+
+    private static void text(Graphics2D g, String s, double x, double y) {
+        g.drawString(s, (float) x, (float) y);
+    }
+
+    private static String fit(Graphics2D g, String s, double w) {
+        FontMetrics fm = g.getFontMetrics();
+        if (fm.stringWidth(s) <= w) {
+            return s;
+        }
+        String t = s;
+        while (t.length() > 1 && fm.stringWidth(t + "…") > w) {
+            t = t.substring(0, t.length() - 1);
+        }
+        return t + "…";
+    }
+
+    private static List<String> wrap(Graphics2D g, String s, double w) {
+        FontMetrics fm = g.getFontMetrics();
+        List<String> lines = new ArrayList<>();
+        StringBuilder line = new StringBuilder();
+        for (String word : s.split(" ")) {
+            String candidate = line.length() == 0 ? word : line + " " + word;
+            if (fm.stringWidth(candidate) > w && line.length() > 0) {
+                lines.add(line.toString());
+                line = new StringBuilder(word);
+            } else {
+                line = new StringBuilder(candidate);
+            }
+        }
+        if (line.length() > 0) {
+            lines.add(line.toString());
+        }
+        return lines;
+    }
+}
