@@ -54,6 +54,7 @@ public final class StudyReader {
     private final String file;
     private final List<Problem> problems = new ArrayList<>();
     private final Binder b;
+    private final java.util.Set<String> declared = new java.util.HashSet<>();
     private double studyKv = Double.NaN;
     private double frequency = 50;
 
@@ -132,11 +133,10 @@ public final class StudyReader {
         StudyReader r = new StudyReader(file);
         Node root = new YamlTreeReader(file, r.problems).read(text);
         Study study = null;
+        // problems of the tree itself (syntax, duplicates, anchors, aliases) leave values missing, and
+        // binding would only echo them
         if (root != null && r.problems.isEmpty()) {
             study = r.study(root, name);
-        } else if (root != null) {
-            // report binding problems too, where the syntax allowed a tree
-            r.study(root, name);
         }
         if (!r.problems.isEmpty() || study == null) {
             List<Problem> sorted = new ArrayList<>(r.problems);
@@ -187,6 +187,7 @@ public final class StudyReader {
         List<Node> cableNodes = limited(b.optionalList(root, "", "cables"), root, "cables");
         for (int i = 0; i < cableNodes.size(); i++) {
             String path = "cables[" + i + "]";
+            declare("cable", cableNodes.get(i));
             Study.StudyCable c = cable(cableNodes.get(i), path);
             if (c != null) {
                 if (cables.containsKey(c.id())) {
@@ -203,6 +204,7 @@ public final class StudyReader {
         List<Node> deviceNodes = limited(b.optionalList(root, "", "devices"), root, "devices");
         for (int i = 0; i < deviceNodes.size(); i++) {
             String path = "devices[" + i + "]";
+            declare("device", deviceNodes.get(i));
             Study.StudyDevice d = device(deviceNodes.get(i), path);
             if (d != null) {
                 if (devices.containsKey(d.id())) {
@@ -228,6 +230,12 @@ public final class StudyReader {
         return new Study(name, title, studyKv, frequency, revision == null ? "" : revision, date == null ? "" : date,
                 "letter".equals(page) ? Study.PageSize.LETTER : Study.PageSize.A4, List.copyOf(cables.values()),
                 List.copyOf(devices.values()), checks);
+    }
+
+    private void declare(String what, Node n) {
+        if (n instanceof Node.MapNode m && b.value(m, "id") instanceof Node.Scalar s) {
+            declared.add(what + ":" + s.text());
+        }
     }
 
     private List<Node> limited(List<Node> items, Node.MapNode root, String key) {
@@ -742,6 +750,10 @@ public final class StudyReader {
     private String reference(Node.MapNode m, String path, String key, java.util.Set<String> ids, String what) {
         String v = b.text(m, path, key, true, "the id of a " + what);
         if (v == null) {
+            return null;
+        }
+        if (!ids.contains(v) && declared.contains(what + ":" + v)) {
+            // declared but invalid: its own problems are reported where it is declared
             return null;
         }
         if (!ids.contains(v)) {

@@ -85,15 +85,23 @@ final class YamlTreeReader {
     }
 
     static String oneLine(String message) {
+        // SnakeYAML's messages hold the context, a source excerpt with a caret, and the problem on
+        // separate lines: keep the context and the problem
         String m = message == null ? "" : message.strip();
-        int nl = m.indexOf('\n');
-        if (nl >= 0) {
-            m = m.substring(0, nl).strip();
+        List<String> kept = new ArrayList<>();
+        for (String line : m.split("\n")) {
+            String t = line.strip();
+            if (t.isEmpty() || line.startsWith(" ") || line.startsWith("\t") || t.startsWith("in 'reader'")
+                    || t.startsWith("at [Source") || t.equals("^")) {
+                continue;
+            }
+            kept.add(t.replaceAll("\\s*in 'reader', line \\d+, column \\d+:?", ""));
         }
-        if (m.length() > 200) {
-            m = m.substring(0, 200) + "...";
+        String joined = String.join(": ", kept);
+        if (joined.length() > 200) {
+            joined = joined.substring(0, 200) + "...";
         }
-        return m.isEmpty() ? "unreadable" : m;
+        return joined.isEmpty() ? "unreadable" : joined;
     }
 
     private Node node(JsonToken t, String path) throws IOException {

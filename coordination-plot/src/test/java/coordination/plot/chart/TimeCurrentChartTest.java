@@ -1,0 +1,88 @@
+package coordination.plot.chart;
+
+import static org.hamcrest.MatcherAssert.assertThat;
+import static org.hamcrest.Matchers.hasItems;
+import static org.hamcrest.Matchers.is;
+
+import coordination.core.cable.CableThermalLimit;
+import coordination.core.cable.ConductorMaterial;
+import coordination.core.cable.Insulation;
+import coordination.core.curve.DefiniteTimeStage;
+import coordination.core.curve.InverseTimeFamily;
+import coordination.core.curve.InverseTimeStage;
+import coordination.core.curve.Relay;
+import coordination.core.margin.CableCheck;
+import coordination.core.margin.CableCheckResult;
+import coordination.core.margin.MarginRequirement;
+import java.util.List;
+import org.junit.jupiter.api.Test;
+import org.knowm.xchart.XYSeries;
+
+class TimeCurrentChartTest {
+    private static final CableThermalLimit CABLE =
+            CableThermalLimit.of("C", ConductorMaterial.COPPER, Insulation.XLPE, 35, 1);
+    private static final Relay RELAY = new Relay("R", List.of(
+            InverseTimeStage.of(InverseTimeFamily.IEC_STANDARD_INVERSE, 250, 0.2),
+            DefiniteTimeStage.definiteTime(3000, 0.1)), 1, 0.05);
+
+    private static TimeCurrentChart chart() {
+        CableCheckResult r = CableCheck.check(RELAY, CABLE, 1500, 12000, MarginRequirement.seconds(0.1));
+        return new TimeCurrentChart(new ChartContent("t", 0.4, List.of(RELAY), List.of(CABLE), 1500, 12000,
+                List.of(r), List.of()), 600, 450);
+    }
+
+    @Test
+    void axesSpanWholeDecadesFromPickupToTheFaultRange() {
+        TimeCurrentChart c = chart();
+        assertThat(c.currentAxis()[0], is(100.0));
+        assertThat(c.currentAxis()[1], is(100_000.0));
+        assertThat(c.timeAxis()[0], is(0.01));
+        assertThat(c.timeAxis()[1], is(1000.0));
+        assertThat(c.chart().getStyler().isXAxisLogarithmic(), is(true));
+        assertThat(c.chart().getStyler().isYAxisLogarithmic(), is(true));
+        assertThat(c.chart().getXAxisTitle(), is("Current (A) at 0.4 kV"));
+    }
+
+    @Test
+    void seriesHoldDeviceCableAndCrossing() {
+        var names = c().getSeriesCollection().stream().map(XYSeries::getName).toList();
+        assertThat(names, hasItems("R", "R minimum", "C damage limit", "C limit above 5 s", "C limit below 0.1 s",
+                "C damaged", "min margin R"));
+    }
+
+    @Test
+    void deviceSeriesStepsVerticallyAtTheDefiniteTimePickup() {
+        XYSeries s = c().getSeries("R");
+        double[] x = s.getXData();
+        double[] y = s.getYData();
+        boolean step = false;
+        for (int i = 1; i < x.length; i++) {
+            if (Math.abs(x[i] / x[i - 1] - 1) < 1e-6 && Math.abs(x[i] - 3000) < 1e-3
+                    && Math.abs(y[i] - 0.15) < 1e-12 && y[i - 1] > 0.5) {
+                step = true;
+            }
+        }
+        assertThat(step, is(true));
+    }
+
+    @Test
+    void cableLimitInsideTheWindowRunsFromFiveSecondsToATenth() {
+        XYSeries s = c().getSeries("C damage limit");
+        double[] y = s.getYData();
+        assertThat(Math.abs(y[0] - 5.0) < 1e-9, is(true));
+        assertThat(Math.abs(y[y.length - 1] - 0.1) < 1e-9, is(true));
+    }
+
+    @Test
+    void tickLabelsReadAsEngineersWriteThem() {
+        assertThat(TimeCurrentChart.amps(10.0), is("10"));
+        assertThat(TimeCurrentChart.amps(1000.0), is("1k"));
+        assertThat(TimeCurrentChart.amps(100000.0), is("100k"));
+        assertThat(TimeCurrentChart.seconds(0.01), is("0.01"));
+        assertThat(TimeCurrentChart.seconds(1000.0), is("1000"));
+    }
+
+    private static org.knowm.xchart.XYChart c() {
+        return chart().chart();
+    }
+}

@@ -1,0 +1,141 @@
+package coordination.plot.cli;
+
+import static org.hamcrest.MatcherAssert.assertThat;
+import static org.hamcrest.Matchers.containsString;
+import static org.hamcrest.Matchers.is;
+import static org.junit.jupiter.api.Assertions.assertEquals;
+
+import java.io.ByteArrayOutputStream;
+import java.io.PrintStream;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.List;
+import java.util.stream.Stream;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
+
+class CliTest {
+    private static final Path SAMPLES = Path.of("../samples/studies");
+
+    /** Result of one in-process run. */
+    record Run(int code, String out, String err) {
+    }
+
+    static Run run(String... args) {
+        ByteArrayOutputStream out = new ByteArrayOutputStream();
+        ByteArrayOutputStream err = new ByteArrayOutputStream();
+        int code = Cli.run(new PrintStream(out, true, StandardCharsets.UTF_8),
+                new PrintStream(err, true, StandardCharsets.UTF_8), args);
+        return new Run(code, out.toString(StandardCharsets.UTF_8), err.toString(StandardCharsets.UTF_8));
+    }
+
+    static List<String> files(Path dir) throws Exception {
+        try (Stream<Path> s = Files.list(dir)) {
+            return s.map(p -> p.getFileName().toString()).sorted().toList();
+        }
+    }
+
+    @Test
+    void checkExitsZeroWhenAllPass() {
+        Run r = run("check", SAMPLES.resolve("01-main-switchboard-incomer.yaml").toString());
+        assertThat(r.code(), is(ExitCodes.PASS));
+        assertThat(r.out(), containsString("01-main-switchboard-incomer: Riverside WTW - main switchboard, pump house"
+                + " feeder P1 - PASS"));
+    }
+
+    @Test
+    void checkExitsOneWhenACheckFails() {
+        Run r = run("check", SAMPLES.toString());
+        assertThat(r.code(), is(ExitCodes.CHECK_FAILED));
+        assertThat(r.out(), containsString("FAIL  cable    B5-relay protects B5-cable"));
+    }
+
+    @Test
+    void checkJsonPrintsTheReport() {
+        Run r = run("check", "--json", SAMPLES.resolve("05-blower-feeder-undersized.yaml").toString());
+        assertThat(r.code(), is(ExitCodes.CHECK_FAILED));
+        assertThat(r.out(), containsString("\"kind\" : \"cable\""));
+        assertThat(r.out(), containsString("\"crossings_a\" : [\n        5548.15"));
+    }
+
+    @Test
+    void badStudyExitsTwoWithLocatedErrorsAndWritesNothing(@TempDir Path tmp) throws Exception {
+        Path bad = tmp.resolve("bad.yaml");
+        Files.writeString(bad, Files.readString(SAMPLES.resolve("05-blower-feeder-undersized.yaml"))
+                .replace("pickup_a: 160,", "pickup_a: lots,"));
+        Path out = tmp.resolve("out");
+        Run r = run("sheet", bad.toString(), "-o", out.toString());
+        assertThat(r.code(), is(ExitCodes.BAD_INPUT));
+        assertEquals(bad + ":23:45: devices[0].stages[0].pickup_a: expected a number, found 'lots'\n", r.err());
+        assertThat(Files.exists(out) ? files(out).size() : 0, is(0));
+    }
+
+    @Test
+    void existingSheetsSurviveAFailedRun(@TempDir Path tmp) throws Exception {
+        Path out = tmp.resolve("out");
+        Path good = tmp.resolve("feeder.yaml");
+        Files.copy(SAMPLES.resolve("05-blower-feeder-undersized.yaml"), good);
+        assertThat(run("sheet", good.toString(), "-o", out.toString()).code(), is(ExitCodes.CHECK_FAILED));
+        byte[] before = Files.readAllBytes(out.resolve("feeder.png"));
+        Files.writeString(good, "format: 1\ntitle: [broken\n");
+        assertThat(run("sheet", good.toString(), "-o", out.toString()).code(), is(ExitCodes.BAD_INPUT));
+        assertThat(java.util.Arrays.equals(before, Files.readAllBytes(out.resolve("feeder.png"))), is(true));
+        assertThat(files(out), is(List.of("feeder.png", "feeder.report.json", "feeder.svg")));
+    }
+
+    @Test
+    void sheetWritesSheetsAndReportsForAFolder(@TempDir Path tmp) throws Exception {
+        Run r = run("sheet", SAMPLES.toString(), "-o", tmp.toString(), "--format", "svg,png,pdf");
+        assertThat(r.code(), is(ExitCodes.CHECK_FAILED));
+        assertThat(r.out(), containsString("sheets: 6 studies, 5 pass, 1 fail, 0 not read; 24 files in"));
+        assertThat(files(tmp).size(), is(24));
+    }
+
+    @Test
+    void unknownOptionIsAUsageError() {
+        Run r = run("check", "--jsn", SAMPLES.toString());
+        assertThat(r.code(), is(ExitCodes.BAD_INPUT));
+        assertThat(r.err(), containsString("coordination: Unknown option: '--jsn'"));
+    }
+
+    @Test
+    void missingFileIsAnInputError() {
+        Run r = run("check", "no-such-study.yaml");
+        assertThat(r.code(), is(ExitCodes.BAD_INPUT));
+        assertEquals("no-such-study.yaml: no such study file or folder\n", r.err());
+    }
+
+    @Test
+    void withstandOfCopperXlpe70SquareMillimetresForOneSecond() {
+        // common practice: k = 143 for copper XLPE 90 to 250 C; I = kS/sqrt(t) = 143.08 x 70 = 10.02 kA
+        Run r = run("withstand", "--conductor", "copper", "--insulation", "xlpe", "--size", "70", "--time", "1");
+        assertThat(r.code(), is(ExitCodes.PASS));
+        assertThat(r.out(), containsString("70 mm²         143.1      90-250    10.02"));
+    }
+
+    @Test
+    void withstandRefusesAnUnknownInsulation() {
+        Run r = run("withstand", "--conductor", "copper", "--insulation", "cotton");
+        assertThat(r.code(), is(ExitCodes.BAD_INPUT));
+        assertEquals("coordination withstand: --insulation: found 'cotton' - must be one of pvc, pvc-90, xlpe, epr,"
+                + " rubber-60, mineral-pvc, mineral-bare, paper\n", r.err());
+    }
+
+    @Test
+    void helpAndVersionAnswer() {
+        assertThat(run("--help").code(), is(0));
+        assertThat(run("sheet", "--help").out(), containsString("-o, --output=OUTDIR"));
+        assertThat(run("--version").out(), containsString("coordination"));
+    }
+
+    @Test
+    void idsWithSlashesNeverSteerWritesOutsideTheFolder(@TempDir Path tmp) throws Exception {
+        Path study = tmp.resolve("..%2F..%2Fescape.yaml");
+        Files.copy(SAMPLES.resolve("02-filter-house-fuse.yaml"), study);
+        Path out = tmp.resolve("out");
+        assertThat(run("sheet", study.toString(), "-o", out.toString()).code(), is(ExitCodes.PASS));
+        assertThat(files(out), is(List.of("..%2F..%2Fescape.png", "..%2F..%2Fescape.report.json",
+                "..%2F..%2Fescape.svg").stream().map(coordination.plot.sheet.SheetWriter::safeName).toList()));
+    }
+}

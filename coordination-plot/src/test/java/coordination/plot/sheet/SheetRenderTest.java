@@ -1,0 +1,97 @@
+package coordination.plot.sheet;
+
+import static org.hamcrest.MatcherAssert.assertThat;
+import static org.hamcrest.Matchers.containsString;
+import static org.hamcrest.Matchers.greaterThan;
+import static org.hamcrest.Matchers.is;
+
+import coordination.core.study.Study;
+import coordination.core.study.StudyReader;
+import coordination.core.study.StudyReport;
+import java.awt.image.BufferedImage;
+import java.io.ByteArrayInputStream;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.Arrays;
+import java.util.List;
+import java.util.concurrent.ExecutorService;
+import java.util.concurrent.Executors;
+import java.util.concurrent.Future;
+import java.util.stream.Stream;
+import javax.imageio.ImageIO;
+import javax.xml.parsers.DocumentBuilderFactory;
+import org.junit.jupiter.params.ParameterizedTest;
+import org.junit.jupiter.params.provider.MethodSource;
+import org.w3c.dom.Document;
+
+/** Renders every sample study and checks the files' structure and their determinism. */
+class SheetRenderTest {
+    static Stream<Path> samples() throws Exception {
+        return Files.list(Path.of("../samples/studies")).filter(p -> p.toString().endsWith(".yaml")).sorted()
+                .toList().stream();
+    }
+
+    private static CoordinationSheet sheet(Path file) {
+        Study s = StudyReader.read(file);
+        return new CoordinationSheet(s, StudyReport.evaluate(s));
+    }
+
+    @ParameterizedTest
+    @MethodSource("samples")
+    void svgParsesAndHoldsTitleCautionAndVerdicts(Path file) throws Exception {
+        Study s = StudyReader.read(file);
+        byte[] svg = new CoordinationSheet(s, StudyReport.evaluate(s)).render(OutputFormat.SVG, 150);
+        DocumentBuilderFactory f = DocumentBuilderFactory.newInstance();
+        f.setFeature("http://apache.org/xml/features/nonvalidating/load-external-dtd", false);
+        Document doc = f.newDocumentBuilder().parse(new ByteArrayInputStream(svg));
+        assertThat(doc.getDocumentElement().getTagName(), is("svg"));
+        String text = doc.getDocumentElement().getTextContent();
+        assertThat(text, containsString(s.title()));
+        assertThat(text, containsString("these results support engineering judgement and do not replace"));
+        assertThat(text, containsString("Devices and settings"));
+        assertThat(text, containsString("Checks"));
+    }
+
+    @ParameterizedTest
+    @MethodSource("samples")
+    void pngDecodesAtThePageSizeAndResolution(Path file) throws Exception {
+        CoordinationSheet sheet = sheet(file);
+        BufferedImage img = ImageIO.read(new ByteArrayInputStream(sheet.render(OutputFormat.PNG, 150)));
+        assertThat(img.getWidth(), is((int) Math.round(sheet.widthPoints() * 150 / 72)));
+        assertThat(img.getHeight(), is((int) Math.round(sheet.heightPoints() * 150 / 72)));
+        BufferedImage hi = ImageIO.read(new ByteArrayInputStream(sheet.render(OutputFormat.PNG, 300)));
+        assertThat(hi.getWidth(), is((int) Math.round(sheet.widthPoints() * 300 / 72)));
+    }
+
+    @ParameterizedTest
+    @MethodSource("samples")
+    void everyFormatIsByteIdenticalAcrossRuns(Path file) throws Exception {
+        for (OutputFormat f : OutputFormat.values()) {
+            byte[] a = sheet(file).render(f, 150);
+            byte[] b = sheet(file).render(f, 150);
+            assertThat(f + " of " + file, Arrays.equals(a, b), is(true));
+            assertThat(a.length, greaterThan(1000));
+        }
+        byte[] pdf = sheet(file).render(OutputFormat.PDF, 150);
+        assertThat(new String(pdf, 0, 5, java.nio.charset.StandardCharsets.US_ASCII), is("%PDF-"));
+    }
+
+    @ParameterizedTest
+    @MethodSource("samples")
+    void parallelRendersAreByteIdentical(Path file) throws Exception {
+        byte[] reference = sheet(file).render(OutputFormat.PNG, 150);
+        ExecutorService pool = Executors.newFixedThreadPool(4);
+        try {
+            List<Future<byte[]>> fs = new ArrayList<>();
+            for (int i = 0; i < 4; i++) {
+                fs.add(pool.submit(() -> sheet(file).render(OutputFormat.PNG, 150)));
+            }
+            for (Future<byte[]> f : fs) {
+                assertThat(Arrays.equals(reference, f.get()), is(true));
+            }
+        } finally {
+            pool.shutdownNow();
+        }
+    }
+}
