@@ -16,8 +16,8 @@ import org.junit.jupiter.api.Test;
  * protect their cables and grade with the switchboard incomer.
  */
 class FeederDesignTest {
-    private static final Study SWITCHBOARD = StudyReader.read(Path.of("studies/01-main-switchboard-incomer.yaml"));
-    private static final Study BLOWER = StudyReader.read(Path.of("studies/05-blower-feeder-undersized.yaml"));
+    private static final Study SWITCHBOARD = StudyReader.read(Path.of("01-main-switchboard-incomer.yaml"));
+    private static final Study BLOWER = StudyReader.read(Path.of("05-blower-feeder-undersized.yaml"));
 
     @Test
     void pumpHouseFeederProtectsItsCableWithATenthOfASecond() {

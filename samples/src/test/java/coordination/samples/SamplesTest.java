@@ -25,7 +25,7 @@ import org.junit.jupiter.params.provider.MethodSource;
 /** Every sample study reads, renders headless, and reports as its committed expected report. */
 class SamplesTest {
     static Stream<Path> studies() throws Exception {
-        try (Stream<Path> s = Files.list(Path.of("studies"))) {
+        try (Stream<Path> s = Files.list(Path.of("."))) {
             return s.filter(p -> p.toString().endsWith(".yaml")).sorted().toList().stream();
         }
     }

@@ -27,6 +27,7 @@ import java.util.List;
  * check and a caution in the footer.
  */
 public final class CoordinationSheet {
+    // not thread-safe: a sheet caches its chart; render one sheet from one thread
     /** The caution printed on every sheet and in the README. */
     public static final String CAUTION = "Caution: these results support engineering judgement and do not replace"
             + " it. Check them against the local codes that apply and have the study reviewed by a qualified,"
@@ -39,6 +40,7 @@ public final class CoordinationSheet {
     private final StudyReport report;
     private final double width;
     private final double height;
+    private TimeCurrentChart chart;
 
     /**
      * Creates the sheet of an evaluated study.
@@ -139,7 +141,11 @@ public final class CoordinationSheet {
     }
 
     private void chart(Graphics2D g, double x, double y, double w, double h) {
-        TimeCurrentChart tcc = new TimeCurrentChart(ChartContent.of(study, report), (int) w, (int) h);
+        // built once and painted for every format; painting does not change it
+        if (chart == null) {
+            chart = new TimeCurrentChart(ChartContent.of(study, report), (int) w, (int) h);
+        }
+        TimeCurrentChart tcc = chart;
         AffineTransform saved = g.getTransform();
         g.translate(x, y);
         tcc.chart().paint(g, (int) w, (int) h);

@@ -16,7 +16,7 @@ import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 
 class CliTest {
-    private static final Path SAMPLES = Path.of("../samples/studies");
+    private static final Path SAMPLES = Path.of("../samples");
 
     /** Result of one in-process run. */
     record Run(int code, String out, String err) {

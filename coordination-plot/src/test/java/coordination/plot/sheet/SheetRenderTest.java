@@ -28,7 +28,7 @@ import org.w3c.dom.Document;
 /** Renders every sample study and checks the files' structure and their determinism. */
 class SheetRenderTest {
     static Stream<Path> samples() throws Exception {
-        return Files.list(Path.of("../samples/studies")).filter(p -> p.toString().endsWith(".yaml")).sorted()
+        return Files.list(Path.of("../samples")).filter(p -> p.toString().endsWith(".yaml")).sorted()
                 .toList().stream();
     }
 
@@ -72,6 +72,11 @@ class SheetRenderTest {
             byte[] b = sheet(file).render(f, 150);
             assertThat(f + " of " + file, Arrays.equals(a, b), is(true));
             assertThat(a.length, greaterThan(1000));
+        }
+        // one sheet rendered to every format in turn gives the same bytes as fresh sheets
+        CoordinationSheet reused = sheet(file);
+        for (OutputFormat f : OutputFormat.values()) {
+            assertThat(f + " reused", Arrays.equals(reused.render(f, 150), sheet(file).render(f, 150)), is(true));
         }
         byte[] pdf = sheet(file).render(OutputFormat.PDF, 150);
         assertThat(new String(pdf, 0, 5, java.nio.charset.StandardCharsets.US_ASCII), is("%PDF-"));
