@@ -77,7 +77,7 @@ public sealed interface MarginRequirement {
 
         @Override
         public String toString() {
-            return "x" + Checks.format(ratio);
+            return "ratio " + Checks.format(ratio);
         }
     }
 }
