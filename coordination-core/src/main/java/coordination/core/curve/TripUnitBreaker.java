@@ -67,6 +67,10 @@ public record TripUnitBreaker(String id, Settings settings) implements Protectiv
                 throw new IllegalArgumentException("trip unit: Isd: found " + Checks.format(isdAmps)
                         + " A - must be above Ir, " + Checks.format(irAmps) + " A");
             }
+            if (shortTimeI2t && !(tsdSeconds > 0)) {
+                throw new IllegalArgumentException("trip unit: tsd: found " + Checks.format(tsdSeconds)
+                        + " s - the short-time I2t ramp needs a delay above 0 s");
+            }
             if (!(iiAmps > irAmps)) {
                 throw new IllegalArgumentException("trip unit: Ii: found " + Checks.format(iiAmps)
                         + " A - must be above Ir, " + Checks.format(irAmps) + " A");
@@ -101,6 +105,9 @@ public record TripUnitBreaker(String id, Settings settings) implements Protectiv
         if (id == null || settings == null) {
             throw new IllegalArgumentException("breaker: found a null id or settings - both must be given");
         }
+        // build both edges now, so that a combination of settings that cannot be drawn fails here
+        edge(id, settings, -1);
+        edge(id, settings, +1);
     }
 
     @Override
@@ -110,16 +117,15 @@ public record TripUnitBreaker(String id, Settings settings) implements Protectiv
 
     @Override
     public TripUnitCurve minimumCurve() {
-        return edge(-1);
+        return edge(id, settings, -1);
     }
 
     @Override
     public TripUnitCurve maximumCurve() {
-        return edge(+1);
+        return edge(id, settings, +1);
     }
 
-    private TripUnitCurve edge(int side) {
-        Settings s = settings;
+    private static TripUnitCurve edge(String id, Settings s, int side) {
         double timeFactor = 1 + side * s.timeTolerance();
         double pickupFactor = 1 + side * s.pickupTolerance();
         double ltPickup = s.irAmps() * (side < 0 ? s.longTimeLowMultiple() : s.longTimeHighMultiple());

@@ -6,6 +6,9 @@ import java.util.List;
 
 /** Typed access to located nodes that records a {@link Problem} for every mistake instead of stopping. */
 final class Binder {
+    /** Longest text value accepted: titles and ids are short. */
+    static final int MAX_TEXT = 500;
+
     private final String file;
     private final List<Problem> problems;
 
@@ -120,6 +123,11 @@ final class Binder {
         if (n instanceof Node.Scalar s && s.type() != Node.ScalarType.NULL) {
             if (s.text().isBlank()) {
                 problem(n, join(path, key), "expected text, found an empty value");
+                return null;
+            }
+            if (s.text().length() > MAX_TEXT) {
+                problem(n, join(path, key), "found text of " + s.text().length() + " characters - at most " + MAX_TEXT
+                        + " are accepted");
                 return null;
             }
             return s.text();

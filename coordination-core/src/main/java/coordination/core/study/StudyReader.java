@@ -170,8 +170,10 @@ public final class StudyReader {
         if (!b.has(root, "format")) {
             b.missing(root, "", "format", "write 'format: 1'");
         } else {
-            double f = b.number(root, "", "format", true, Double.NaN, 1, false, 1, "");
-            if (Double.isNaN(f) && b.value(root, "format") instanceof Node.Scalar) {
+            Node f = b.value(root, "format");
+            if (!(f instanceof Node.Scalar s && s.type() == Node.ScalarType.NUMBER && s.number() == 1)) {
+                b.problem(f == null ? root : f, "format", "found " + (f == null ? "nothing" : f.kindName())
+                        + " - this reader knows format 1 only");
                 return null;
             }
         }
@@ -219,9 +221,13 @@ public final class StudyReader {
         List<Study.StudyCheck> checks = new ArrayList<>();
         List<Node> checkNodes = limited(b.optionalList(root, "", "checks"), root, "checks");
         for (int i = 0; i < checkNodes.size(); i++) {
-            Study.StudyCheck c = check(checkNodes.get(i), "checks[" + i + "]", cables, devices);
-            if (c != null) {
-                checks.add(c);
+            try {
+                Study.StudyCheck c = check(checkNodes.get(i), "checks[" + i + "]", cables, devices);
+                if (c != null) {
+                    checks.add(c);
+                }
+            } catch (IllegalArgumentException e) {
+                b.problem(checkNodes.get(i), "checks[" + i + "]", e.getMessage());
             }
         }
         if (!problems.isEmpty() || title == null) {
@@ -365,12 +371,19 @@ public final class StudyReader {
         double kv = b.number(m, path, "voltage_kv", false, studyKv, 0, true, 1000, "kV");
         int before = b.problemCount();
         List<String> settings = new ArrayList<>();
-        ProtectiveDevice device = switch (type) {
-            case "relay" -> relay(m, path, id, settings);
-            case "fuse" -> fuse(m, path, id, settings);
-            case "breaker" -> breaker(m, path, id, settings);
-            default -> mcb(m, path, id, settings);
-        };
+        ProtectiveDevice device;
+        try {
+            device = switch (type) {
+                case "relay" -> relay(m, path, id, settings);
+                case "fuse" -> fuse(m, path, id, settings);
+                case "breaker" -> breaker(m, path, id, settings);
+                default -> mcb(m, path, id, settings);
+            };
+        } catch (IllegalArgumentException e) {
+            // a combination of settings the model refuses, each valid on its own
+            b.problem(m, path, e.getMessage());
+            return null;
+        }
         if (device == null || id == null || Double.isNaN(kv) || b.problemCount() > before) {
             return null;
         }
@@ -683,7 +696,7 @@ public final class StudyReader {
                 }
                 b.allowOnly(d, p, "kappa");
                 double kappa = b.number(d, p, "kappa", true, Double.NaN, 1, true, 2, "");
-                if (Double.isNaN(kappa)) {
+                if (Double.isNaN(kappa) || Double.isNaN(frequency)) {
                     return null;
                 }
                 dc = new DcOffset(kappa, frequency);

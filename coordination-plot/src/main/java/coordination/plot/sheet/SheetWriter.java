@@ -71,27 +71,70 @@ public final class SheetWriter {
     }
 
     /**
-     * Writes rendered files into a folder, each atomically.
+     * Writes rendered files into a folder: every file is first written under a temporary name,
+     * and only when all are written are they moved into place, so a failure (a full disk, a name
+     * taken by a folder) leaves the folder's existing files as they were.
      *
      * @param folder the output folder, created if missing
      * @param files names and bytes
      * @return the paths written
-     * @throws IOException if a file cannot be written; files already moved into place stay, the
-     *     file being written is not left behind
+     * @throws IOException if a file cannot be written; no temporary file is left behind
      */
     public static List<Path> write(Path folder, Map<String, byte[]> files) throws IOException {
         Files.createDirectories(folder);
         Path real = folder.toRealPath();
-        List<Path> written = new ArrayList<>();
-        for (Map.Entry<String, byte[]> e : files.entrySet()) {
-            Path target = real.resolve(safeName(e.getKey())).normalize();
+        List<Path> targets = new ArrayList<>();
+        for (String name : files.keySet()) {
+            Path target = real.resolve(safeName(name)).normalize();
             if (!real.equals(target.getParent())) {
-                throw new IOException("refusing to write outside " + real + ": " + e.getKey());
+                throw new IOException("refusing to write outside " + real + ": " + name);
             }
-            writeAtomically(target, e.getValue());
-            written.add(target);
+            if (Files.isDirectory(target, java.nio.file.LinkOption.NOFOLLOW_LINKS)
+                    || Files.isSymbolicLink(target)) {
+                throw new IOException(target + " is a folder or a link - it is not replaced");
+            }
+            targets.add(target);
         }
-        return written;
+        List<Path> temps = new ArrayList<>();
+        try {
+            int i = 0;
+            for (byte[] bytes : files.values()) {
+                temps.add(writeTemporary(targets.get(i++), bytes));
+            }
+            for (int k = 0; k < targets.size(); k++) {
+                move(temps.get(k), targets.get(k));
+            }
+        } finally {
+            for (Path t : temps) {
+                Files.deleteIfExists(t);
+            }
+        }
+        return targets;
+    }
+
+    private static Path writeTemporary(Path target, byte[] bytes) throws IOException {
+        Path tmp = Files.createTempFile(target.getParent(), "." + target.getFileName() + ".", ".tmp");
+        try {
+            Files.write(tmp, bytes);
+            try {
+                // temporary files are private; a sheet is as readable as any file the user writes
+                Files.setPosixFilePermissions(tmp, java.nio.file.attribute.PosixFilePermissions.fromString("rw-r--r--"));
+            } catch (UnsupportedOperationException e) {
+                // not a POSIX file system: the default permissions stand
+            }
+            return tmp;
+        } catch (IOException | RuntimeException e) {
+            Files.deleteIfExists(tmp);
+            throw e;
+        }
+    }
+
+    private static void move(Path tmp, Path target) throws IOException {
+        try {
+            Files.move(tmp, target, StandardCopyOption.ATOMIC_MOVE, StandardCopyOption.REPLACE_EXISTING);
+        } catch (AtomicMoveNotSupportedException e) {
+            Files.move(tmp, target, StandardCopyOption.REPLACE_EXISTING);
+        }
     }
 
     /**
@@ -102,20 +145,9 @@ public final class SheetWriter {
      * @throws IOException if writing fails; the temporary file is removed
      */
     public static void writeAtomically(Path target, byte[] bytes) throws IOException {
-        Path tmp = Files.createTempFile(target.getParent(), "." + target.getFileName() + ".", ".tmp");
+        Path tmp = writeTemporary(target, bytes);
         try {
-            Files.write(tmp, bytes);
-            try {
-                // temporary files are private; a sheet is as readable as any file the user writes
-                Files.setPosixFilePermissions(tmp, java.nio.file.attribute.PosixFilePermissions.fromString("rw-r--r--"));
-            } catch (UnsupportedOperationException e) {
-                // not a POSIX file system: the default permissions stand
-            }
-            try {
-                Files.move(tmp, target, StandardCopyOption.ATOMIC_MOVE, StandardCopyOption.REPLACE_EXISTING);
-            } catch (AtomicMoveNotSupportedException e) {
-                Files.move(tmp, target, StandardCopyOption.REPLACE_EXISTING);
-            }
+            move(tmp, target);
         } finally {
             Files.deleteIfExists(tmp);
         }

@@ -138,4 +138,57 @@ class CliTest {
         assertThat(files(out), is(List.of("..%2F..%2Fescape.png", "..%2F..%2Fescape.report.json",
                 "..%2F..%2Fescape.svg").stream().map(coordination.plot.sheet.SheetWriter::safeName).toList()));
     }
+
+    @Test
+    void aBlockedTargetLeavesTheExistingSheetsAsTheyWere(@TempDir Path tmp) throws Exception {
+        Path out = tmp.resolve("out");
+        Path study = tmp.resolve("feeder.yaml");
+        Files.copy(SAMPLES.resolve("02-filter-house-fuse.yaml"), study);
+        assertThat(run("sheet", study.toString(), "-o", out.toString()).code(), is(ExitCodes.PASS));
+        byte[] svg = Files.readAllBytes(out.resolve("feeder.svg"));
+        // a new revision of the study, whose report cannot be written: a folder holds its name
+        Files.writeString(study, Files.readString(study).replace("revision: A", "revision: B"));
+        Files.delete(out.resolve("feeder.report.json"));
+        Files.createDirectory(out.resolve("feeder.report.json"));
+        Run r = run("sheet", study.toString(), "-o", out.toString());
+        assertThat(r.code(), is(ExitCodes.BAD_INPUT));
+        assertThat(r.err(), containsString("feeder.report.json is a folder or a link - it is not replaced"));
+        assertThat(java.util.Arrays.equals(svg, Files.readAllBytes(out.resolve("feeder.svg"))), is(true));
+        assertThat(files(out), is(List.of("feeder.png", "feeder.report.json", "feeder.svg")));
+    }
+
+    @Test
+    void anOutputPathThatIsAFileIsRefused(@TempDir Path tmp) throws Exception {
+        Path out = tmp.resolve("taken");
+        Files.writeString(out, "not a folder");
+        Run r = run("sheet", SAMPLES.resolve("02-filter-house-fuse.yaml").toString(), "-o", out.toString());
+        assertThat(r.code(), is(ExitCodes.BAD_INPUT));
+        assertThat(r.err(), containsString("cannot write to " + out));
+        assertThat(Files.readString(out), is("not a folder"));
+    }
+
+    @Test
+    void aBadStudyAmongGoodOnesStopsOnlyItself(@TempDir Path tmp) throws Exception {
+        Path in = tmp.resolve("in");
+        Files.createDirectories(in);
+        Files.copy(SAMPLES.resolve("02-filter-house-fuse.yaml"), in.resolve("good.yaml"));
+        Files.writeString(in.resolve("bad.yaml"), "format: 1\ntitle: x\nvoltage_kv: [\n");
+        byte[] before = Files.readAllBytes(in.resolve("good.yaml"));
+        Path out = tmp.resolve("out");
+        Run r = run("sheet", in.toString(), "-o", out.toString());
+        assertThat(r.code(), is(ExitCodes.BAD_INPUT));
+        assertThat(files(out), is(List.of("good.png", "good.report.json", "good.svg")));
+        // the user's study files are never touched
+        assertThat(java.util.Arrays.equals(before, Files.readAllBytes(in.resolve("good.yaml"))), is(true));
+    }
+
+    @Test
+    void controlCharactersInAFileNameNeverReachTheOutputName(@TempDir Path tmp) throws Exception {
+        Path study = tmp.resolve("line\nbreak\tand\u0007bell.yaml");
+        Files.copy(SAMPLES.resolve("02-filter-house-fuse.yaml"), study);
+        Path out = tmp.resolve("out");
+        assertThat(run("sheet", study.toString(), "-o", out.toString()).code(), is(ExitCodes.PASS));
+        assertThat(files(out), is(List.of("line_break_and_bell.png", "line_break_and_bell.report.json",
+                "line_break_and_bell.svg")));
+    }
 }
