@@ -10,7 +10,7 @@ import picocli.CommandLine.Command;
 @Command(name = "coordination", mixinStandardHelpOptions = true, versionProvider = Cli.Version.class,
         description = "Checks that protective devices protect their cables and grade with each other,"
                 + " and draws coordination sheets.",
-        subcommands = {SheetCommand.class, CheckCommand.class, WithstandCommand.class},
+        subcommands = {SheetCommand.class, CheckCommand.class, WithstandCommand.class, DesignCommand.class},
         exitCodeOnInvalidInput = ExitCodes.BAD_INPUT, exitCodeOnExecutionException = ExitCodes.BAD_INPUT)
 public final class Cli implements Runnable {
     private final PrintStream out;
@@ -86,6 +86,9 @@ public final class Cli implements Runnable {
             }
             if (cls == WithstandCommand.class) {
                 return cls.cast(new WithstandCommand(out, err));
+            }
+            if (cls == DesignCommand.class) {
+                return cls.cast(new DesignCommand(out, err));
             }
             return CommandLine.defaultFactory().create(cls);
         }

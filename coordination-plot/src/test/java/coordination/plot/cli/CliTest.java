@@ -191,4 +191,21 @@ class CliTest {
         assertThat(files(out), is(List.of("line_break_and_bell.png", "line_break_and_bell.report.json",
                 "line_break_and_bell.svg")));
     }
+
+    @Test
+    void designProposesSizesSettingsAndGrading() {
+        Run r = run("design", SAMPLES.resolve("01-main-switchboard-incomer.yaml").toString());
+        assertThat(r.code(), is(ExitCodes.PASS));
+        assertThat(r.out(), containsString("conductor  now 95 mm², smallest 48.72 mm² -> 50 mm² or 1/0 AWG"));
+        assertThat(r.out(), containsString("TX1-HV-relay multiplier now 0.25, proposed 0.1063 (interval 0.3 s)"));
+        Run j = run("design", "--json", SAMPLES.resolve("05-blower-feeder-undersized.yaml").toString());
+        assertThat(j.out(), containsString("\"next_iec_mm2\" : 35.0"));
+    }
+
+    @Test
+    void designOfABadStudyIsAnInputError() {
+        Run r = run("design", "no-such.yaml");
+        assertThat(r.code(), is(ExitCodes.BAD_INPUT));
+        assertEquals("no-such.yaml: no such study file or folder\n", r.err());
+    }
 }
