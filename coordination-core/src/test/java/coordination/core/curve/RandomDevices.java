@@ -92,7 +92,11 @@ public final class RandomDevices {
      */
     public static MiniatureBreaker mcb(SplittableRandom r) {
         double[] ratings = {6, 10, 16, 20, 25, 32, 40, 50, 63, 80, 100, 125};
-        return MiniatureBreaker.of("M", McbType.values()[r.nextInt(3)], ratings[r.nextInt(ratings.length)]);
+        McbType type = McbType.values()[r.nextInt(3)];
+        double rating = ratings[r.nextInt(ratings.length)];
+        // half of them with a maker's let-through energy
+        double i2t = r.nextBoolean() ? logUniform(r, 5e3, 2e5) : Double.NaN;
+        return new MiniatureBreaker("M", type, rating, MiniatureBreaker.DEFAULT_FASTEST_SECONDS, i2t);
     }
 
     /**
