@@ -34,6 +34,8 @@ public final class TimeCurrentChart {
     private static final int POINTS = 400;
     /** Largest distance, in chart points, of a dropped drawing point from the drawn line. */
     private static final double SIMPLIFY_TOLERANCE = 0.25;
+    /** Factor by which the axes reach past their end decades. */
+    private static final double AXIS_SLACK = 0.995;
     /** Default time axis: 0.01 s to 1000 s. */
     private static final double TIME_MIN = 0.01;
     private static final double TIME_MAX = 1000;
@@ -140,10 +142,11 @@ public final class TimeCurrentChart {
         s.setYAxisLogarithmic(true);
         s.setXAxisLogarithmicDecadeOnly(true);
         s.setYAxisLogarithmicDecadeOnly(true);
-        s.setXAxisMin(xMin);
-        s.setXAxisMax(xMax);
-        s.setYAxisMin(yMin);
-        s.setYAxisMax(yMax);
+        // a hair beyond the decades, so that the end decades get their labels too
+        s.setXAxisMin(xMin * AXIS_SLACK);
+        s.setXAxisMax(xMax / AXIS_SLACK);
+        s.setYAxisMin(yMin * AXIS_SLACK);
+        s.setYAxisMax(yMax / AXIS_SLACK);
         s.setPlotContentSize(0.995);
         s.setChartBackgroundColor(Color.WHITE);
         s.setPlotBackgroundColor(Color.WHITE);

@@ -24,10 +24,10 @@ import java.util.List;
 /**
  * A coordination sheet: one landscape page with a title block taken from the study (never from
  * the clock), the time-current chart, the device settings, the cable data, the results of every
- * check and a caution in the footer.
+ * check and a caution in the footer. A sheet builds its chart once and keeps it for every format,
+ * so one sheet is rendered from one thread at a time; separate sheets render in parallel.
  */
 public final class CoordinationSheet {
-    // not thread-safe: a sheet caches its chart; render one sheet from one thread
     /** The caution printed on every sheet and in the README. */
     public static final String CAUTION = "Caution: these results support engineering judgement and do not replace"
             + " it. Check them against the local codes that apply and have the study reviewed by a qualified,"
@@ -124,8 +124,9 @@ public final class CoordinationSheet {
         // verdict box, worded as well as coloured
         boolean pass = report.pass();
         int fails = report.failures();
-        String verdict = pass ? "ALL " + report.order().size() + " CHECKS PASS" : fails + " OF " + report.order().size()
-                + " CHECKS FAIL";
+        int n = report.order().size();
+        String verdict = n == 0 ? "NO CHECKS" : pass ? (n == 1 ? "THE CHECK PASSES" : "ALL " + n + " CHECKS PASS")
+                : fails + " OF " + n + (n == 1 ? " CHECK FAILS" : " CHECKS FAIL");
         g.setFont(Palette.font(Font.BOLD, 10f));
         FontMetrics fm = g.getFontMetrics();
         double bw = fm.stringWidth(verdict) + 16;
