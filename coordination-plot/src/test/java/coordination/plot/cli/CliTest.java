@@ -5,8 +5,6 @@ import static org.hamcrest.Matchers.containsString;
 import static org.hamcrest.Matchers.is;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 
-import java.io.ByteArrayOutputStream;
-import java.io.PrintStream;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
@@ -18,16 +16,8 @@ import org.junit.jupiter.api.io.TempDir;
 class CliTest {
     private static final Path SAMPLES = Path.of("../samples");
 
-    /** Result of one in-process run. */
-    record Run(int code, String out, String err) {
-    }
-
-    static Run run(String... args) {
-        ByteArrayOutputStream out = new ByteArrayOutputStream();
-        ByteArrayOutputStream err = new ByteArrayOutputStream();
-        int code = Cli.run(new PrintStream(out, true, StandardCharsets.UTF_8),
-                new PrintStream(err, true, StandardCharsets.UTF_8), args);
-        return new Run(code, out.toString(StandardCharsets.UTF_8), err.toString(StandardCharsets.UTF_8));
+    static InProcess.Run run(String... args) {
+        return InProcess.run(args);
     }
 
     static List<String> files(Path dir) throws Exception {
@@ -38,7 +28,7 @@ class CliTest {
 
     @Test
     void checkExitsZeroWhenAllPass() {
-        Run r = run("check", SAMPLES.resolve("01-main-switchboard-incomer.yaml").toString());
+        InProcess.Run r = run("check", SAMPLES.resolve("01-main-switchboard-incomer.yaml").toString());
         assertThat(r.code(), is(ExitCodes.PASS));
         assertThat(r.out(), containsString("01-main-switchboard-incomer: Riverside WTW - main switchboard, pump house"
                 + " feeder P1 - PASS"));
@@ -46,14 +36,14 @@ class CliTest {
 
     @Test
     void checkExitsOneWhenACheckFails() {
-        Run r = run("check", SAMPLES.toString());
+        InProcess.Run r = run("check", SAMPLES.toString());
         assertThat(r.code(), is(ExitCodes.CHECK_FAILED));
         assertThat(r.out(), containsString("FAIL  cable    B5-relay protects B5-cable"));
     }
 
     @Test
     void checkJsonPrintsTheReport() {
-        Run r = run("check", "--json", SAMPLES.resolve("05-blower-feeder-undersized.yaml").toString());
+        InProcess.Run r = run("check", "--json", SAMPLES.resolve("05-blower-feeder-undersized.yaml").toString());
         assertThat(r.code(), is(ExitCodes.CHECK_FAILED));
         assertThat(r.out(), containsString("\"kind\" : \"cable\""));
         assertThat(r.out(), containsString("\"crossings_a\" : [\n        5548.15"));
@@ -65,7 +55,7 @@ class CliTest {
         Files.writeString(bad, Files.readString(SAMPLES.resolve("05-blower-feeder-undersized.yaml"))
                 .replace("pickup_a: 160,", "pickup_a: lots,"));
         Path out = tmp.resolve("out");
-        Run r = run("sheet", bad.toString(), "-o", out.toString());
+        InProcess.Run r = run("sheet", bad.toString(), "-o", out.toString());
         assertThat(r.code(), is(ExitCodes.BAD_INPUT));
         assertEquals(bad + ":23:45: devices[0].stages[0].pickup_a: expected a number, found 'lots'\n", r.err());
         assertThat(Files.exists(out) ? files(out).size() : 0, is(0));
@@ -86,7 +76,7 @@ class CliTest {
 
     @Test
     void sheetWritesSheetsAndReportsForAFolder(@TempDir Path tmp) throws Exception {
-        Run r = run("sheet", SAMPLES.toString(), "-o", tmp.toString(), "--format", "svg,png,pdf");
+        InProcess.Run r = run("sheet", SAMPLES.toString(), "-o", tmp.toString(), "--format", "svg,png,pdf");
         assertThat(r.code(), is(ExitCodes.CHECK_FAILED));
         assertThat(r.out(), containsString("sheets: 6 studies, 5 pass, 1 fail, 0 not read; 24 files in"));
         assertThat(files(tmp).size(), is(24));
@@ -94,14 +84,14 @@ class CliTest {
 
     @Test
     void unknownOptionIsAUsageError() {
-        Run r = run("check", "--jsn", SAMPLES.toString());
+        InProcess.Run r = run("check", "--jsn", SAMPLES.toString());
         assertThat(r.code(), is(ExitCodes.BAD_INPUT));
         assertThat(r.err(), containsString("coordination: Unknown option: '--jsn'"));
     }
 
     @Test
     void missingFileIsAnInputError() {
-        Run r = run("check", "no-such-study.yaml");
+        InProcess.Run r = run("check", "no-such-study.yaml");
         assertThat(r.code(), is(ExitCodes.BAD_INPUT));
         assertEquals("no-such-study.yaml: no such study file or folder\n", r.err());
     }
@@ -109,14 +99,14 @@ class CliTest {
     @Test
     void withstandOfCopperXlpe70SquareMillimetresForOneSecond() {
         // common practice: k = 143 for copper XLPE 90 to 250 C; I = kS/sqrt(t) = 143.08 x 70 = 10.02 kA
-        Run r = run("withstand", "--conductor", "copper", "--insulation", "xlpe", "--size", "70", "--time", "1");
+        InProcess.Run r = run("withstand", "--conductor", "copper", "--insulation", "xlpe", "--size", "70", "--time", "1");
         assertThat(r.code(), is(ExitCodes.PASS));
         assertThat(r.out(), containsString("70 mm²         143.1      90-250    10.02"));
     }
 
     @Test
     void withstandRefusesAnUnknownInsulation() {
-        Run r = run("withstand", "--conductor", "copper", "--insulation", "cotton");
+        InProcess.Run r = run("withstand", "--conductor", "copper", "--insulation", "cotton");
         assertThat(r.code(), is(ExitCodes.BAD_INPUT));
         assertEquals("coordination withstand: --insulation: found 'cotton' - must be one of pvc, pvc-90, xlpe, epr,"
                 + " rubber-60, mineral-pvc, mineral-bare, paper\n", r.err());
@@ -150,7 +140,7 @@ class CliTest {
         Files.writeString(study, Files.readString(study).replace("revision: A", "revision: B"));
         Files.delete(out.resolve("feeder.report.json"));
         Files.createDirectory(out.resolve("feeder.report.json"));
-        Run r = run("sheet", study.toString(), "-o", out.toString());
+        InProcess.Run r = run("sheet", study.toString(), "-o", out.toString());
         assertThat(r.code(), is(ExitCodes.BAD_INPUT));
         assertThat(r.err(), containsString("feeder.report.json is a folder or a link - it is not replaced"));
         assertThat(java.util.Arrays.equals(svg, Files.readAllBytes(out.resolve("feeder.svg"))), is(true));
@@ -161,7 +151,7 @@ class CliTest {
     void anOutputPathThatIsAFileIsRefused(@TempDir Path tmp) throws Exception {
         Path out = tmp.resolve("taken");
         Files.writeString(out, "not a folder");
-        Run r = run("sheet", SAMPLES.resolve("02-filter-house-fuse.yaml").toString(), "-o", out.toString());
+        InProcess.Run r = run("sheet", SAMPLES.resolve("02-filter-house-fuse.yaml").toString(), "-o", out.toString());
         assertThat(r.code(), is(ExitCodes.BAD_INPUT));
         assertThat(r.err(), containsString("cannot write to " + out));
         assertThat(Files.readString(out), is("not a folder"));
@@ -175,7 +165,7 @@ class CliTest {
         Files.writeString(in.resolve("bad.yaml"), "format: 1\ntitle: x\nvoltage_kv: [\n");
         byte[] before = Files.readAllBytes(in.resolve("good.yaml"));
         Path out = tmp.resolve("out");
-        Run r = run("sheet", in.toString(), "-o", out.toString());
+        InProcess.Run r = run("sheet", in.toString(), "-o", out.toString());
         assertThat(r.code(), is(ExitCodes.BAD_INPUT));
         assertThat(files(out), is(List.of("good.png", "good.report.json", "good.svg")));
         // the user's study files are never touched
@@ -194,17 +184,17 @@ class CliTest {
 
     @Test
     void designProposesSizesSettingsAndGrading() {
-        Run r = run("design", SAMPLES.resolve("01-main-switchboard-incomer.yaml").toString());
+        InProcess.Run r = run("design", SAMPLES.resolve("01-main-switchboard-incomer.yaml").toString());
         assertThat(r.code(), is(ExitCodes.PASS));
         assertThat(r.out(), containsString("conductor  now 95 mm², smallest 48.72 mm² -> 50 mm² or 1/0 AWG"));
         assertThat(r.out(), containsString("TX1-HV-relay multiplier now 0.25, proposed 0.1063 (interval 0.3 s)"));
-        Run j = run("design", "--json", SAMPLES.resolve("05-blower-feeder-undersized.yaml").toString());
+        InProcess.Run j = run("design", "--json", SAMPLES.resolve("05-blower-feeder-undersized.yaml").toString());
         assertThat(j.out(), containsString("\"next_iec_mm2\" : 35.0"));
     }
 
     @Test
     void designOfABadStudyIsAnInputError() {
-        Run r = run("design", "no-such.yaml");
+        InProcess.Run r = run("design", "no-such.yaml");
         assertThat(r.code(), is(ExitCodes.BAD_INPUT));
         assertEquals("no-such.yaml: no such study file or folder\n", r.err());
     }

@@ -10,10 +10,8 @@ import coordination.core.margin.CableCheckResult;
 import coordination.core.study.Study;
 import coordination.core.study.StudyReader;
 import coordination.core.study.StudyReport;
-import coordination.plot.cli.Cli;
 import coordination.plot.cli.ExitCodes;
-import java.io.ByteArrayOutputStream;
-import java.io.PrintStream;
+import coordination.plot.cli.InProcess;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
@@ -46,15 +44,8 @@ class ConformanceTest {
         }
     }
 
-    record Run(int code, String out, String err) {
-    }
-
-    static Run run(String... args) {
-        ByteArrayOutputStream out = new ByteArrayOutputStream();
-        ByteArrayOutputStream err = new ByteArrayOutputStream();
-        int code = Cli.run(new PrintStream(out, true, StandardCharsets.UTF_8),
-                new PrintStream(err, true, StandardCharsets.UTF_8), args);
-        return new Run(code, out.toString(StandardCharsets.UTF_8), err.toString(StandardCharsets.UTF_8));
+    static InProcess.Run run(String... args) {
+        return InProcess.run(args);
     }
 
     private static String expected(Path file, String suffix, String actual) throws Exception {
@@ -75,7 +66,7 @@ class ConformanceTest {
     @ParameterizedTest
     @MethodSource("valid")
     void validCasePrintsItsExpectedReport(Path file) throws Exception {
-        Run r = run("check", "--json", file.toString());
+        InProcess.Run r = run("check", "--json", file.toString());
         assertThat(r.err(), is(""));
         assertThat(r.out(), is(expected(file, ".expected.json", r.out())));
         boolean pass = r.out().contains("\n  \"pass\" : true,");
@@ -85,7 +76,7 @@ class ConformanceTest {
     @ParameterizedTest
     @MethodSource("invalid")
     void invalidCasePrintsItsExpectedErrors(Path file) throws Exception {
-        Run r = run("check", file.toString());
+        InProcess.Run r = run("check", file.toString());
         assertThat(r.code(), is(ExitCodes.BAD_INPUT));
         assertThat(r.out(), is(""));
         // expected lines are stored without the folder, as the file's own name
@@ -177,7 +168,7 @@ class ConformanceTest {
                 String mutated = text.substring(0, at[0]) + numbers[r.nextInt(numbers.length)] + text.substring(at[1]);
                 Path f = tmp.resolve("case.yaml");
                 Files.writeString(f, mutated);
-                Run run = n % 5 == 0 ? run("sheet", f.toString(), "-o", tmp.resolve("out").toString())
+                InProcess.Run run = n % 5 == 0 ? run("sheet", f.toString(), "-o", tmp.resolve("out").toString())
                         : run("check", "--json", f.toString());
                 assertThat(mutated + "\n" + run.err(), run.code() >= 0 && run.code() <= 2, is(true));
                 assertThat(mutated + "\n" + run.err(), run.err().contains("\tat ") || run.err().contains("internal error"),
