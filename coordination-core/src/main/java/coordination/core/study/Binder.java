@@ -68,7 +68,8 @@ final class Binder {
         String best = null;
         int bestDistance = Integer.MAX_VALUE;
         for (String c : candidates) {
-            int d = c.startsWith(given + "_") || given.startsWith(c + "_") ? 1 : distance(given, c);
+            int d = c.equalsIgnoreCase(given) ? 0
+                    : c.startsWith(given + "_") || given.startsWith(c + "_") ? 1 : distance(given, c);
             if (d < bestDistance) {
                 bestDistance = d;
                 best = c;

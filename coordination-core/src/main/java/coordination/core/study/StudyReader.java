@@ -770,10 +770,13 @@ public final class StudyReader {
             return null;
         }
         if (!ids.contains(v)) {
-            String hint = Binder.suggestion(v, ids.toArray(new String[0]));
+            // suggest among every declared id, valid or not: the author's typo is in this reference
+            List<String> known = declared.stream().filter(d -> d.startsWith(what + ":"))
+                    .map(d -> d.substring(what.length() + 1)).sorted().toList();
+            String hint = Binder.suggestion(v, known.toArray(new String[0]));
             b.problem(b.value(m, key), Binder.join(path, key), "no " + what + " has the id '" + v + "'"
-                    + (hint != null ? " - did you mean '" + hint + "'?" : ids.isEmpty() ? " - the study has none"
-                    : " - known: " + String.join(", ", ids.stream().sorted().toList())));
+                    + (hint != null ? " - did you mean '" + hint + "'?" : known.isEmpty() ? " - the study has none"
+                    : " - known: " + String.join(", ", known)));
             return null;
         }
         return v;
