@@ -98,8 +98,8 @@ class StudyReaderTest {
 
     @Test
     void checkNamingAnUnknownDevice() {
-        assertThat(problems(VALID.replace("device: F7-relay, margin_s", "device: F8-relay, margin_s")), contains(
-                "study.yaml:24:31: checks[0].device: no device has the id 'F8-relay' - did you mean 'F7-relay'?"));
+        assertThat(problems(VALID.replace("device: F7-relay, margin_s", "device: F7-rely, margin_s")), contains(
+                "study.yaml:24:31: checks[0].device: no device has the id 'F7-rely' - did you mean 'F7-relay'?"));
     }
 
     @Test
