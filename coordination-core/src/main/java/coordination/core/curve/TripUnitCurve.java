@@ -14,6 +14,10 @@ import coordination.core.internal.Checks;
  *   <li>instantaneous, I at or above {@code instantaneousPickupAmps}: {@code t = instantaneousSeconds}.</li>
  * </ul>
  *
+ * No region clears faster than {@code instantaneousSeconds}: the breaker's own opening and
+ * arcing time bounds every trip, so the constant-I²t regions are held at it where they would fall
+ * below it.
+ *
  * @param longTimePickupAmps long-time pickup in amperes, above 0
  * @param longTimeI2tA2s long-time constant I²t in A²s, above 0
  * @param shortTimePickupAmps short-time pickup in amperes, or infinity for none
@@ -72,14 +76,18 @@ public record TripUnitCurve(
         if (amps >= instantaneousPickupAmps) {
             t = Math.min(t, instantaneousSeconds);
         }
-        return t;
+        return Double.isInfinite(t) ? t : Math.max(t, instantaneousSeconds);
     }
 
     @Override
     public double[] breakpointsAmps() {
-        double[] b = new double[5];
+        double[] b = new double[6];
         int n = 0;
         b[n++] = longTimePickupAmps;
+        if (instantaneousSeconds > 0) {
+            // where the long-time region reaches the opening-time floor
+            b[n++] = Math.sqrt(longTimeI2tA2s / instantaneousSeconds);
+        }
         if (Double.isFinite(shortTimePickupAmps)) {
             b[n++] = shortTimePickupAmps;
             if (!Double.isNaN(shortTimeRampI2tA2s) && shortTimeSeconds > 0) {
