@@ -28,12 +28,31 @@ class SchemaTest {
     }
 
     static Stream<Path> studies() throws Exception {
-        return SamplesTest.studies();
+        try (Stream<Path> corpus = Files.list(Path.of("../spec/cases/valid"))) {
+            return Stream.concat(SamplesTest.studies(),
+                    corpus.filter(p -> p.toString().endsWith(".yaml")).sorted().toList().stream());
+        }
     }
 
     static Stream<Path> reports() throws Exception {
-        try (Stream<Path> s = Files.list(Path.of("expected"))) {
-            return s.sorted().toList().stream();
+        try (Stream<Path> s = Files.list(Path.of("expected"));
+                Stream<Path> corpus = Files.list(Path.of("../spec/cases/valid"))) {
+            return Stream.concat(s.sorted().toList().stream(),
+                    corpus.filter(p -> p.toString().endsWith(".expected.json")).sorted().toList().stream());
+        }
+    }
+
+    /** The study examples in README.md and spec/study-format.md are valid studies. */
+    @Test
+    void documentedExamplesAreValidStudies() throws Exception {
+        for (String doc : new String[] {"../README.md", "../spec/study-format.md"}) {
+            String text = Files.readString(Path.of(doc));
+            int start = text.indexOf("```yaml\n");
+            String yaml = text.substring(start + 8, text.indexOf("```", start + 8));
+            coordination.core.study.Study study = coordination.core.study.StudyReader.parse(doc, "example", yaml);
+            assertThat(doc, study.checks(), not(empty()));
+            Set<ValidationMessage> errors = schema("study.schema.json").validate(new YAMLMapper().readTree(yaml));
+            assertThat(doc + ": " + errors, errors, empty());
         }
     }
 
