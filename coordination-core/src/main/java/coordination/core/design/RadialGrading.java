@@ -33,12 +33,14 @@ public final class RadialGrading {
      * @param relay the relay; its first inverse-time stage's multiplier is chosen
      * @param referFactor current scale to the chain's common voltage base
      * @param cable the cable it protects, or null
+     * @param cableMargin the margin the cable needs (ignored without a cable)
      * @param faultMinAmps lowest fault current at its location in amperes (on the common base)
      * @param faultMaxAmps highest fault current at its location in amperes
      * @param minMultiplier the relay's smallest multiplier setting
      * @param maxMultiplier the relay's largest multiplier setting
      */
-    public record Link(Relay relay, double referFactor, CableThermalLimit cable, double faultMinAmps,
+    public record Link(Relay relay, double referFactor, CableThermalLimit cable, MarginRequirement cableMargin,
+            double faultMinAmps,
             double faultMaxAmps, double minMultiplier, double maxMultiplier) {
     }
 
@@ -62,10 +64,9 @@ public final class RadialGrading {
      *
      * @param chain relays from the load end (index 0) to the source
      * @param interval the coordination time interval in seconds
-     * @param margin the margin each cable needs
      * @return one setting per relay, in chain order
      */
-    public static List<Setting> grade(List<Link> chain, double interval, MarginRequirement margin) {
+    public static List<Setting> grade(List<Link> chain, double interval) {
         List<Setting> out = new ArrayList<>();
         ProtectiveDevice below = null;
         Link belowLink = null;
@@ -104,7 +105,7 @@ public final class RadialGrading {
             CableCheckResult cable = null;
             if (!Double.isNaN(m) && link.cable() != null) {
                 cable = CableCheck.check(with(link, index, stage, m), link.cable(), link.faultMinAmps(),
-                        link.faultMaxAmps(), margin);
+                        link.faultMaxAmps(), link.cableMargin());
                 if (!cable.pass()) {
                     problem = "the grading needs multiplier " + Checks.format(m) + ", at which '" + link.cable().id()
                             + "' is not protected (" + cable.reason() + "); no multiplier meets both";

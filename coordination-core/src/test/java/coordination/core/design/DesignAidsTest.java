@@ -81,8 +81,8 @@ class DesignAidsTest {
         Relay down = Relay.of("D", InverseTimeStage.of(InverseTimeFamily.IEC_STANDARD_INVERSE, 300, 0.3));
         Relay up = Relay.of("U", InverseTimeStage.of(InverseTimeFamily.IEC_STANDARD_INVERSE, 300, 0.9));
         List<RadialGrading.Setting> s = RadialGrading.grade(List.of(
-                new RadialGrading.Link(down, 1, null, 1000, 6000, 0.05, 1.0),
-                new RadialGrading.Link(up, 1, null, 1000, 8000, 0.05, 1.0)), 0.3, MarginRequirement.seconds(0));
+                new RadialGrading.Link(down, 1, null, MarginRequirement.seconds(0), 1000, 6000, 0.05, 1.0),
+                new RadialGrading.Link(up, 1, null, MarginRequirement.seconds(0), 1000, 8000, 0.05, 1.0)), 0.3);
         assertThat(s.get(0).multiplier(), is(0.05));
         double expected = 0.05 + 0.3 * (Math.pow(6000 / 300.0, 0.02) - 1) / 0.14;
         assertThat(s.get(1).multiplier(), closeTo(expected, expected * SOLVED));
@@ -95,8 +95,8 @@ class DesignAidsTest {
         Relay down = Relay.of("D", InverseTimeStage.of(InverseTimeFamily.IEC_STANDARD_INVERSE, 300, 0.3));
         Relay up = Relay.of("U", InverseTimeStage.of(InverseTimeFamily.IEC_STANDARD_INVERSE, 300, 0.9));
         List<RadialGrading.Setting> s = RadialGrading.grade(List.of(
-                new RadialGrading.Link(down, 1, null, 1000, 6000, 0.05, 1.0),
-                new RadialGrading.Link(up, 1, small, 1000, 8000, 0.05, 1.0)), 0.3, MarginRequirement.seconds(0));
+                new RadialGrading.Link(down, 1, null, MarginRequirement.seconds(0), 1000, 6000, 0.05, 1.0),
+                new RadialGrading.Link(up, 1, small, MarginRequirement.seconds(0), 1000, 8000, 0.05, 1.0)), 0.3);
         assertThat(s.get(1).problem(), containsString("no multiplier meets both"));
     }
 
@@ -180,8 +180,8 @@ class DesignAidsTest {
                     ((InverseTimeStage) down.stages().get(0)).pickupAmps()) * 1.5;
             double hi = lo * 5;
             List<RadialGrading.Setting> s = RadialGrading.grade(List.of(
-                    new RadialGrading.Link(down, 1, null, lo, hi, 0.05, 1.0),
-                    new RadialGrading.Link(up, 1, null, lo, hi * 1.5, 0.05, 20)), 0.3, MarginRequirement.seconds(0));
+                    new RadialGrading.Link(down, 1, null, MarginRequirement.seconds(0), lo, hi, 0.05, 1.0),
+                    new RadialGrading.Link(up, 1, null, MarginRequirement.seconds(0), lo, hi * 1.5, 0.05, 20)), 0.3);
             double m = s.get(1).multiplier();
             if (Double.isNaN(m) || m <= 0.05) {
                 continue;

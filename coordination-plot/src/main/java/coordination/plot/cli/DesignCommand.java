@@ -183,13 +183,13 @@ final class DesignCommand implements Callable<Integer> {
                 double hi = g != null ? g.toAmps() : cc != null ? cc.toAmps() : links.get(links.size() - 1).faultMaxAmps();
                 double[] r = range(stage);
                 links.add(new RadialGrading.Link(relay, d.voltageKv() / study.voltageKv(),
-                        cc == null ? null : study.cable(cc.cable()).limit(), lo, hi, r[0], r[1]));
+                        cc == null ? null : study.cable(cc.cable()).limit(),
+                        cc == null ? MarginRequirement.seconds(0) : cc.requirement(), lo, hi, r[0], r[1]));
                 ids.add(id);
                 id = g == null ? null : g.upstream();
             }
-            MarginRequirement margin = MarginRequirement.seconds(0);
             List<Object> settings = new ArrayList<>();
-            for (RadialGrading.Setting s : RadialGrading.grade(links, interval, margin)) {
+            for (RadialGrading.Setting s : RadialGrading.grade(links, interval)) {
                 Map<String, Object> m = new LinkedHashMap<>();
                 m.put("relay", s.id());
                 m.put("now", s.currentMultiplier());
