@@ -3,7 +3,7 @@ package coordination.core.cable;
 /**
  * Conductor materials with the constants of IEC 60949:1988+A1:2008, Table I: K (A·s^½/mm²) and
  * β (K, the reciprocal of the temperature coefficient of resistance at 0 °C), and the ICEA
- * P-32-382 constants for the same materials.
+ * P-32-382 constants for the same materials (all from memory).
  */
 public enum ConductorMaterial {
     /** Copper: K = 226 A·s^½/mm², β = 234.5 K; ICEA: 0.0297 and 234. */

@@ -9,6 +9,8 @@ package coordination.core.curve;
  * where M is the time multiplier setting (TMS) or time dial (TD), Ip the pickup current, and A (s),
  * B (s) and p the constants below. The IEEE families also carry the reset constant tr (s) of the
  * electromechanical reset characteristic {@code t_r(I) = M * tr / (1 - (I/Ip)^2)} for I below pickup.
+ * The constants are as recalled from the two standards (from memory); the IEEE ones agree with the
+ * tables relay makers publish for C37.112.
  */
 public enum InverseTimeFamily {
     /** IEC 60255-151 curve A, standard (normal) inverse: A = 0.14 s, p = 0.02. */

@@ -4,7 +4,7 @@ import coordination.core.internal.Checks;
 
 /**
  * A miniature circuit breaker to IEC 60898-1:2015, its band built from the time-current points of
- * Table 7:
+ * Table 7 (from memory):
  *
  * <ul>
  *   <li>thermal region: the conventional non-tripping current 1.13 In (no trip within 1 h) and the

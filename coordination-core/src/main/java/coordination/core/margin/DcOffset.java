@@ -4,7 +4,7 @@ import coordination.core.internal.Checks;
 
 /**
  * Heating by the decaying DC component of a short-circuit current, as the factor m of
- * IEC 60909-0:2016, clause 12 (thermal equivalent short-circuit current):
+ * IEC 60909-0:2016, clause 12 (thermal equivalent short-circuit current; formula from memory):
  *
  * <pre>m = 1 / (2 f T ln(κ - 1)) × (e^(4 f T ln(κ - 1)) - 1)</pre>
  *
