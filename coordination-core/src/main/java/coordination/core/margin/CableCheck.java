@@ -270,24 +270,10 @@ public final class CableCheck {
 
     /** The range ends, the device's breakpoints inside, and the window edges. */
     private double[] splitPoints() {
-        double[] bp = curve.breakpointsAmps();
-        double[] pts = new double[bp.length + 4];
-        int n = 0;
-        pts[n++] = fromAmps;
-        pts[n++] = toAmps;
-        for (double b : bp) {
-            if (b > fromAmps && b < toAmps) {
-                pts[n++] = b;
-            }
-        }
-        for (double edge : new double[] {curve.lowestDefinedAmps(), curve.highestDefinedAmps()}) {
-            if (edge > fromAmps && edge < toAmps) {
-                pts[n++] = edge;
-            }
-        }
-        double[] base = sortedUnique(Arrays.copyOf(pts, n));
+        double[] base = LogAxis.splitPoints(fromAmps, toAmps, curve.breakpointsAmps(),
+                new double[] {curve.lowestDefinedAmps(), curve.highestDefinedAmps()});
         // window edges: where the clearing time passes 0.1 s and 5 s inside a smooth segment
-        double[] edges = new double[2 * base.length + 2];
+        double[] edges = new double[2 * base.length];
         int m = 0;
         for (int i = 0; i + 1 < base.length; i++) {
             double xa = Math.log(base[i]) + (i == 0 ? 0 : SIDE_OFFSET);
@@ -300,25 +286,12 @@ public final class CableCheck {
                 CableThermalLimit.ADIABATIC_MAX_SECONDS}) {
                 double logLimit = Math.log(limit);
                 double r = LogAxis.monotoneRoot(x -> Math.log(deviceSeconds(Math.exp(x))) - logLimit, xa, xb);
-                if (!Double.isNaN(r) && m < edges.length) {
+                if (!Double.isNaN(r)) {
                     edges[m++] = Math.exp(r);
                 }
             }
         }
-        double[] all = Arrays.copyOf(base, base.length + m);
-        System.arraycopy(edges, 0, all, base.length, m);
-        return sortedUnique(all);
-    }
-
-    private double[] sortedUnique(double[] values) {
-        Arrays.sort(values);
-        int k = 0;
-        for (double v : values) {
-            if (v >= fromAmps && v <= toAmps && (k == 0 || v > values[k - 1])) {
-                values[k++] = v;
-            }
-        }
-        return Arrays.copyOf(values, k);
+        return LogAxis.splitPoints(fromAmps, toAmps, base, Arrays.copyOf(edges, m));
     }
 
     /** Running minima over the segments, with their locations and sides. */

@@ -6,7 +6,6 @@ import coordination.core.curve.TimeCurrentCurve;
 import coordination.core.internal.Checks;
 import coordination.core.internal.LogAxis;
 import java.util.ArrayList;
-import java.util.Arrays;
 import java.util.List;
 
 /**
@@ -192,28 +191,8 @@ public final class GradingCheck {
     }
 
     private double[] splitPoints() {
-        double[] bu = up.breakpointsAmps();
-        double[] bd = down.breakpointsAmps();
-        double[] pts = new double[bu.length + bd.length + 6];
-        int n = 0;
-        pts[n++] = fromAmps;
-        pts[n++] = toAmps;
-        for (double[] arr : new double[][] {bu, bd, {up.lowestDefinedAmps(), up.highestDefinedAmps(),
-            down.lowestDefinedAmps(), down.highestDefinedAmps()}}) {
-            for (double b : arr) {
-                if (b > fromAmps && b < toAmps) {
-                    pts[n++] = b;
-                }
-            }
-        }
-        double[] all = Arrays.copyOf(pts, n);
-        Arrays.sort(all);
-        int k = 0;
-        for (double v : all) {
-            if (k == 0 || v > all[k - 1]) {
-                all[k++] = v;
-            }
-        }
-        return Arrays.copyOf(all, k);
+        return LogAxis.splitPoints(fromAmps, toAmps, up.breakpointsAmps(), down.breakpointsAmps(),
+                new double[] {up.lowestDefinedAmps(), up.highestDefinedAmps(), down.lowestDefinedAmps(),
+                    down.highestDefinedAmps()});
     }
 }

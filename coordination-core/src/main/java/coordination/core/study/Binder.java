@@ -300,15 +300,10 @@ final class Binder {
         return ok ? new double[][] {amps, secs} : null;
     }
 
+    /** A list that may be missing or empty (a key with no value counts as empty). */
     List<Node> optionalList(Node.MapNode m, String path, String key) {
         Node n = value(m, key);
-        if (n == null) {
-            if (has(m, key)) {
-                return new ArrayList<>();
-            }
-            return new ArrayList<>();
-        }
-        List<Node> l = list(n, join(path, key));
+        List<Node> l = n == null ? null : list(n, join(path, key));
         return l == null ? new ArrayList<>() : l;
     }
 

@@ -29,7 +29,6 @@ import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
-import java.util.Arrays;
 import java.util.HashMap;
 import java.util.LinkedHashMap;
 import java.util.List;
@@ -780,10 +779,5 @@ public final class StudyReader {
             return null;
         }
         return v;
-    }
-
-    @SuppressWarnings("unused")
-    private static String list(String... words) {
-        return String.join(", ", Arrays.asList(words));
     }
 }

@@ -260,7 +260,7 @@ public final class CoordinationSheet {
                     Double.isNaN(r.undefinedFromAmps()) && Double.isNaN(r.notClearedFromAmps())
                         && Double.isFinite(r.minMarginSeconds())
                         ? seconds(r.minMarginSeconds()) + " s (ratio " + Checks.format(round(r.minRatio(), 3)) + ")"
-                        : shortReason(r.reason()),
+                        : r.reason(),
                     Double.isFinite(r.minMarginSeconds()) ? kiloamps(r.minMarginAtAmps()) + " kA" : "",
                     crossings(r.crossingsAmps()), r.requirement().toString(), pass ? "pass" : "FAIL"};
             } else {
@@ -268,7 +268,7 @@ public final class CoordinationSheet {
                 pass = r.pass();
                 cells = new String[] {r.downstream() + " grades under " + r.upstream(),
                     Double.isFinite(r.minIntervalSeconds()) ? seconds(r.minIntervalSeconds()) + " s"
-                        : shortReason(r.reason()),
+                        : r.reason(),
                     Double.isFinite(r.minIntervalSeconds()) ? kiloamps(r.minIntervalAtAmps()) + " kA" : "",
                     crossings(r.crossingsAmps()), r.requirement().toString(), pass ? "pass" : "FAIL"};
             }
@@ -302,10 +302,6 @@ public final class CoordinationSheet {
             text(g, l, MARGIN, ly);
             ly += 8;
         }
-    }
-
-    private static String shortReason(String reason) {
-        return reason;
     }
 
     private static String crossings(double[] amps) {

@@ -8,7 +8,6 @@ import java.awt.RenderingHints;
 import java.awt.image.BufferedImage;
 import java.io.ByteArrayOutputStream;
 import java.io.IOException;
-import java.io.OutputStream;
 import java.nio.charset.StandardCharsets;
 import java.security.MessageDigest;
 import java.security.NoSuchAlgorithmException;
@@ -136,27 +135,5 @@ public final class Drawing {
         } catch (NoSuchAlgorithmException e) {
             throw new IllegalStateException("MD5 is required of every Java platform", e);
         }
-    }
-
-    /**
-     * Writes bytes to a stream.
-     *
-     * @param bytes the bytes
-     * @param out the stream, left open
-     * @throws IOException if writing fails
-     */
-    public static void copy(byte[] bytes, OutputStream out) throws IOException {
-        out.write(bytes);
-        out.flush();
-    }
-
-    /**
-     * Text of an SVG rendering, for tests and tools.
-     *
-     * @param bytes SVG bytes
-     * @return the text
-     */
-    public static String text(byte[] bytes) {
-        return new String(bytes, StandardCharsets.UTF_8);
     }
 }
