@@ -134,7 +134,10 @@ public final class CableCheck {
 
     private CableCheckResult compute() {
         double[] points = splitPoints();
-        Extremes ex = new Extremes();
+        RunningMinimum margin = new RunningMinimum();
+        RunningMinimum ratio = new RunningMinimum();
+        CurrentSpan notCleared = new CurrentSpan();
+        CurrentSpan undefined = new CurrentSpan();
         List<Double> crossings = new ArrayList<>();
         List<ThermalRegion> regions = new ArrayList<>();
         double prevRatioLog = Double.NaN;
@@ -149,13 +152,13 @@ public final class CableCheck {
             double tMid = deviceSeconds(Math.exp(0.5 * (xa + xb)));
             double tRight = deviceSeconds(Math.exp(xb));
             if (Double.isNaN(tMid) || Double.isNaN(tRight)) {
-                ex.undefined(a, b);
+                undefined.add(a, b);
                 addRegion(regions, a, b, ThermalRegion.UNDEFINED);
                 prevRatioLog = Double.NaN;
                 continue;
             }
             if (Double.isInfinite(tRight)) {
-                ex.notCleared(a, b);
+                notCleared.add(a, b);
                 addRegion(regions, a, b, ThermalRegion.NOT_CLEARED);
                 prevRatioLog = Double.NEGATIVE_INFINITY;
                 continue;
@@ -165,9 +168,10 @@ public final class CableCheck {
             boolean afterGap = i == 0 || prevRatioLog == Double.NEGATIVE_INFINITY;
             if (afterGap && divergesAt(xa)) {
                 // an inverse stage's asymptote at its pickup: the margin has no lower bound there
-                ex.unbounded(a, i == 0 ? Side.AT : Side.ABOVE);
+                margin.unbounded(a, i == 0);
+                ratio.unbounded(a, i == 0);
                 if (i == 0 && Double.isInfinite(deviceSeconds(a))) {
-                    ex.notCleared(a, a);
+                    notCleared.add(a, a);
                 }
                 xa = Math.min(xb, xa + LogAxis.DIVERGENCE_PROBE);
             }
@@ -186,8 +190,8 @@ public final class CableCheck {
             }
             // minimum time margin and minimum ratio on this smooth segment
             boolean last = i + 2 == points.length || points.length == 1;
-            ex.margin(LogAxis.minimum(this::margin, xs, margins), a, b, xa, xb, i == 0, last);
-            ex.ratio(LogAxis.minimum(this::logRatio, xs, ratios), a, b, xa, xb, i == 0, last);
+            margin.offer(LogAxis.minimum(this::margin, xs, margins), a, b, xa, xb, i == 0, last);
+            ratio.offer(LogAxis.minimum(this::logRatio, xs, ratios), a, b, xa, xb, i == 0, last);
             for (double root : LogAxis.roots(this::logRatio, xs, ratios)) {
                 double amps = Math.exp(root);
                 if (amps > fromAmps && amps < toAmps) {
@@ -200,12 +204,12 @@ public final class CableCheck {
             }
         }
         double[] c = sortedDistinct(crossings);
-        boolean clearsEverywhere = Double.isNaN(ex.notClearedFrom) && Double.isNaN(ex.undefinedFrom);
-        boolean pass = clearsEverywhere && !Double.isNaN(ex.minMargin)
-                && requirement.isMetBy(ex.minMargin, Math.exp(ex.minLogRatio));
-        return new CableCheckResult(device.id(), cable.id(), fromAmps, toAmps, requirement, pass, ex.minMargin,
-                ex.minMarginAt, ex.minMarginSide, Math.exp(ex.minLogRatio), ex.minRatioAt, ex.minRatioSide, c,
-                ex.notClearedFrom, ex.notClearedTo, ex.undefinedFrom, ex.undefinedTo, regions);
+        boolean clearsEverywhere = notCleared.isEmpty() && undefined.isEmpty();
+        boolean pass = clearsEverywhere && !Double.isNaN(margin.value())
+                && requirement.isMetBy(margin.value(), Math.exp(ratio.value()));
+        return new CableCheckResult(device.id(), cable.id(), fromAmps, toAmps, requirement, pass, margin.value(),
+                margin.at(), margin.side(), Math.exp(ratio.value()), ratio.at(), ratio.side(), c,
+                notCleared.from(), notCleared.to(), undefined.from(), undefined.to(), regions);
     }
 
     private boolean divergesAt(double x) {
@@ -227,7 +231,7 @@ public final class CableCheck {
         return n == v.length ? v : Arrays.copyOf(v, n);
     }
 
-    private static boolean crosses(double before, double after) {
+    static boolean crosses(double before, double after) {
         return before < 0 && after > 0 || before > 0 && after < 0;
     }
 
@@ -292,76 +296,5 @@ public final class CableCheck {
             }
         }
         return LogAxis.splitPoints(fromAmps, toAmps, base, Arrays.copyOf(edges, m));
-    }
-
-    /** Running minima over the segments, with their locations and sides. */
-    private static final class Extremes {
-        double minMargin = Double.NaN;
-        double minMarginAt = Double.NaN;
-        Side minMarginSide = Side.AT;
-        double minLogRatio = Double.NaN;
-        double minRatioAt = Double.NaN;
-        Side minRatioSide = Side.AT;
-        double notClearedFrom = Double.NaN;
-        double notClearedTo = Double.NaN;
-        double undefinedFrom = Double.NaN;
-        double undefinedTo = Double.NaN;
-
-        void margin(LogAxis.Point p, double a, double b, double xa, double xb, boolean first, boolean last) {
-            if (Double.isNaN(minMargin) || p.value() < minMargin) {
-                minMargin = p.value();
-                minMarginAt = locate(p.x(), a, b, xa, xb);
-                minMarginSide = side(p.x(), xa, xb, first, last);
-            }
-        }
-
-        void unbounded(double a, Side side) {
-            if (!(minMargin == Double.NEGATIVE_INFINITY)) {
-                minMargin = Double.NEGATIVE_INFINITY;
-                minMarginAt = a;
-                minMarginSide = side;
-                minLogRatio = Double.NEGATIVE_INFINITY;
-                minRatioAt = a;
-                minRatioSide = side;
-            }
-        }
-
-        void ratio(LogAxis.Point p, double a, double b, double xa, double xb, boolean first, boolean last) {
-            if (Double.isNaN(minLogRatio) || p.value() < minLogRatio) {
-                minLogRatio = p.value();
-                minRatioAt = locate(p.x(), a, b, xa, xb);
-                minRatioSide = side(p.x(), xa, xb, first, last);
-            }
-        }
-
-        void notCleared(double a, double b) {
-            notClearedFrom = Double.isNaN(notClearedFrom) ? a : Math.min(notClearedFrom, a);
-            notClearedTo = Double.isNaN(notClearedTo) ? b : Math.max(notClearedTo, b);
-        }
-
-        void undefined(double a, double b) {
-            undefinedFrom = Double.isNaN(undefinedFrom) ? a : Math.min(undefinedFrom, a);
-            undefinedTo = Double.isNaN(undefinedTo) ? b : Math.max(undefinedTo, b);
-        }
-
-        private static double locate(double x, double a, double b, double xa, double xb) {
-            if (x <= xa) {
-                return a;
-            }
-            if (x >= xb) {
-                return b;
-            }
-            return Math.exp(x);
-        }
-
-        private static Side side(double x, double xa, double xb, boolean first, boolean last) {
-            if (x <= xa && !first) {
-                return Side.ABOVE;
-            }
-            if (x >= xb && !last) {
-                return Side.BELOW;
-            }
-            return Side.AT;
-        }
     }
 }

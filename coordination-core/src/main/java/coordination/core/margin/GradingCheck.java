@@ -90,11 +90,8 @@ public final class GradingCheck {
 
     private GradingCheckResult compute() {
         double[] points = splitPoints();
-        double minInterval = Double.NaN;
-        double minAt = Double.NaN;
-        Side minSide = Side.AT;
-        double undefinedFrom = Double.NaN;
-        double undefinedTo = Double.NaN;
+        RunningMinimum interval = new RunningMinimum();
+        CurrentSpan undefined = new CurrentSpan();
         List<Double> crossings = new ArrayList<>();
         double prevLog = Double.NaN;
         int segments = Math.max(1, points.length - 1);
@@ -108,8 +105,7 @@ public final class GradingCheck {
             double mid = Math.exp(0.5 * (xa + xb));
             double right = Math.exp(xb);
             if (Double.isNaN(time(up, mid)) || Double.isNaN(time(down, mid))) {
-                undefinedFrom = Double.isNaN(undefinedFrom) ? a : Math.min(undefinedFrom, a);
-                undefinedTo = Double.isNaN(undefinedTo) ? b : Math.max(undefinedTo, b);
+                undefined.add(a, b);
                 prevLog = Double.NaN;
                 continue;
             }
@@ -120,22 +116,14 @@ public final class GradingCheck {
                 continue;
             }
             if (!downOperates) {
-                if (!(minInterval == Double.NEGATIVE_INFINITY)) {
-                    minInterval = Double.NEGATIVE_INFINITY;
-                    minAt = a;
-                    minSide = first ? Side.AT : Side.ABOVE;
-                }
+                interval.unbounded(a, first);
                 prevLog = Double.NEGATIVE_INFINITY;
                 continue;
             }
             boolean afterGap = first || prevLog == Double.NEGATIVE_INFINITY || Double.isNaN(prevLog);
             if (afterGap && LogAxis.divergesAt(v -> time(down, Math.exp(v)), xa)) {
                 // the downstream curve's asymptote at its pickup: the interval has no lower bound there
-                if (!(minInterval == Double.NEGATIVE_INFINITY)) {
-                    minInterval = Double.NEGATIVE_INFINITY;
-                    minAt = a;
-                    minSide = first ? Side.AT : Side.ABOVE;
-                }
+                interval.unbounded(a, first);
                 xa = Math.min(xb, xa + LogAxis.DIVERGENCE_PROBE);
             }
             double[] xs = LogAxis.scanPoints(xa, xb);
@@ -149,23 +137,10 @@ public final class GradingCheck {
                 logs[k] = Math.log(tu) - Math.log(td);
             }
             double leftLog = logs[0];
-            if (!first && !Double.isNaN(prevLog) && (prevLog < 0 && leftLog > 0 || prevLog > 0 && leftLog < 0)) {
+            if (!first && !Double.isNaN(prevLog) && CableCheck.crosses(prevLog, leftLog)) {
                 crossings.add(a);
             }
-            LogAxis.Point p = LogAxis.minimum(this::interval, xs, intervals);
-            if (Double.isNaN(minInterval) || p.value() < minInterval) {
-                minInterval = p.value();
-                if (p.x() <= xa) {
-                    minAt = a;
-                    minSide = first ? Side.AT : Side.ABOVE;
-                } else if (p.x() >= xb) {
-                    minAt = b;
-                    minSide = last ? Side.AT : Side.BELOW;
-                } else {
-                    minAt = Math.exp(p.x());
-                    minSide = Side.AT;
-                }
-            }
+            interval.offer(LogAxis.minimum(this::interval, xs, intervals), a, b, xa, xb, first, last);
             for (double r : LogAxis.roots(this::logRatio, xs, logs)) {
                 double amps = Math.exp(r);
                 if (amps > fromAmps && amps < toAmps) {
@@ -176,7 +151,8 @@ public final class GradingCheck {
         }
         double ratio = upstream instanceof Fuse fu && downstream instanceof Fuse fd
                 ? fu.ratingAmps() / fd.ratingAmps() : Double.NaN;
-        boolean defined = Double.isNaN(undefinedFrom) && !Double.isNaN(minInterval);
+        double minInterval = interval.value();
+        boolean defined = undefined.isEmpty() && !Double.isNaN(minInterval);
         boolean pass;
         if (requirement instanceof GradingRequirement.Interval iv) {
             pass = defined && minInterval >= iv.seconds();
@@ -187,7 +163,7 @@ public final class GradingCheck {
         }
         double[] c = CableCheck.sortedDistinct(crossings);
         return new GradingCheckResult(upstream.id(), downstream.id(), fromAmps, toAmps, requirement, pass, minInterval,
-                minAt, minSide, c, ratio, undefinedFrom, undefinedTo);
+                interval.at(), interval.side(), c, ratio, undefined.from(), undefined.to());
     }
 
     private double[] splitPoints() {

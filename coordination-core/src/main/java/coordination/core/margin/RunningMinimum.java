@@ -1,0 +1,72 @@
+package coordination.core.margin;
+
+import coordination.core.internal.LogAxis;
+
+/**
+ * The smallest value met over the segments of a check's range, the current where it occurs and
+ * the side of a step it occurs on. A minimum at a segment end that is a step of the curve is
+ * reported at the step, from the side of the segment it was found in.
+ */
+final class RunningMinimum {
+    private double value = Double.NaN;
+    private double at = Double.NaN;
+    private Side side = Side.AT;
+
+    /**
+     * Offers a segment's minimum.
+     *
+     * @param p the minimum found on the segment, in x = ln(I)
+     * @param a the segment's lower current
+     * @param b its upper current
+     * @param xa the lowest x evaluated (just inside a step)
+     * @param xb the highest x evaluated
+     * @param first whether a is the range's lower end (not a step)
+     * @param last whether b is the range's upper end
+     */
+    void offer(LogAxis.Point p, double a, double b, double xa, double xb, boolean first, boolean last) {
+        if (!Double.isNaN(value) && !(p.value() < value)) {
+            return;
+        }
+        value = p.value();
+        if (p.x() <= xa) {
+            at = a;
+            side = first ? Side.AT : Side.ABOVE;
+        } else if (p.x() >= xb) {
+            at = b;
+            side = last ? Side.AT : Side.BELOW;
+        } else {
+            at = Math.exp(p.x());
+            side = Side.AT;
+        }
+    }
+
+    /**
+     * Records a value without lower bound (a pole, or a device that does not operate) at the lower
+     * end of a segment; the first such place is kept.
+     *
+     * @param a the segment's lower current
+     * @param first whether a is the range's lower end
+     */
+    void unbounded(double a, boolean first) {
+        if (value != Double.NEGATIVE_INFINITY) {
+            value = Double.NEGATIVE_INFINITY;
+            at = a;
+            side = first ? Side.AT : Side.ABOVE;
+        }
+    }
+
+    /** @return the minimum, NaN if nothing was offered */
+    double value() {
+        return value;
+    }
+
+    /** @return its current in amperes */
+    double at() {
+        return at;
+    }
+
+    /** @return its side */
+    Side side() {
+        return side;
+    }
+}
