@@ -165,6 +165,13 @@ public final class CoordinationSheet {
 
     private double devicesTable(Graphics2D g, double x, double y, double w, double bottom) {
         double cy = heading(g, "Devices and settings", x, y, w);
+        // how to read the curves, so that a relay's thin operating line is not taken for another device
+        g.setFont(Palette.font(Font.PLAIN, 6.5f));
+        g.setColor(Palette.MARK);
+        text(g, fit(g, "Thick line: clearing time (relays with breaker time). Thin line: relay operating time.", w),
+                x, cy + 7);
+        text(g, fit(g, "Shaded band: fastest to slowest tolerance of fuses and breakers.", w), x, cy + 15);
+        cy += 19;
         g.setFont(Palette.font(Font.PLAIN, 7f));
         int index = 0;
         int shown = 0;
