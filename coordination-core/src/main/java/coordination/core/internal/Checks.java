@@ -61,6 +61,23 @@ public final class Checks {
     }
 
     /**
+     * Requires a range of currents: both ends finite and above zero, the upper at or above the lower.
+     *
+     * @param subject what the range is, e.g. {@code "check range"}
+     * @param fromAmps lower end in amperes
+     * @param toAmps upper end in amperes
+     * @throws IllegalArgumentException if an end is not positive or the range is inverted
+     */
+    public static void currentRange(String subject, double fromAmps, double toAmps) {
+        positive(subject + ": lowest current", fromAmps, "A");
+        positive(subject + ": highest current", toAmps, "A");
+        if (toAmps < fromAmps) {
+            throw new IllegalArgumentException(subject + ": highest current " + format(toAmps)
+                    + " A is below the lowest " + format(fromAmps) + " A - must be at or above it");
+        }
+    }
+
+    /**
      * Formats a number for a message: up to six significant digits, no exponent for ordinary values.
      *
      * @param value the number

@@ -6,10 +6,13 @@ import coordination.core.curve.ProtectiveDevice;
 import coordination.core.curve.TimeCurrentCurve;
 import coordination.core.internal.Checks;
 import coordination.core.internal.LogAxis;
+import coordination.core.internal.SegmentWalk;
+import coordination.core.internal.SmoothScan;
 import java.util.ArrayList;
 import java.util.Arrays;
 import java.util.List;
 import java.util.OptionalDouble;
+import java.util.function.DoubleUnaryOperator;
 
 /**
  * Whether a protective device clears every fault in a current range before a cable reaches its
@@ -30,8 +33,8 @@ import java.util.OptionalDouble;
  * limit is conservative and reported as such, unless the cable uses the non-adiabatic method.
  */
 public final class CableCheck {
-    /** Offset in ln(I) used to take one-sided limits at a step of a curve. */
-    private static final double SIDE_OFFSET = 1e-11;
+    private static final double[] WINDOW_EDGES_SECONDS = {CableThermalLimit.ADIABATIC_MIN_SECONDS,
+        CableThermalLimit.ADIABATIC_MAX_SECONDS};
 
     private final ProtectiveDevice device;
     private final CableThermalLimit cable;
@@ -57,12 +60,7 @@ public final class CableCheck {
      */
     public CableCheck(ProtectiveDevice device, CableThermalLimit cable, double fromAmps, double toAmps,
             MarginRequirement requirement, DcOffset dcOffset) {
-        Checks.positive("check range: lowest current", fromAmps, "A");
-        Checks.positive("check range: highest current", toAmps, "A");
-        if (toAmps < fromAmps) {
-            throw new IllegalArgumentException("check range: highest current " + Checks.format(toAmps)
-                    + " A is below the lowest " + Checks.format(fromAmps) + " A - must be at or above it");
-        }
+        Checks.currentRange("check range", fromAmps, toAmps);
         this.device = device;
         this.cable = cable;
         this.fromAmps = fromAmps;
@@ -133,106 +131,63 @@ public final class CableCheck {
     }
 
     private CableCheckResult compute() {
-        double[] points = splitPoints();
         RunningMinimum margin = new RunningMinimum();
         RunningMinimum ratio = new RunningMinimum();
         CurrentSpan notCleared = new CurrentSpan();
         CurrentSpan undefined = new CurrentSpan();
-        List<Double> crossings = new ArrayList<>();
         List<ThermalRegion> regions = new ArrayList<>();
-        double prevRatioLog = Double.NaN;
-        for (int i = 0; i + 1 < points.length || i == 0 && points.length == 1; i++) {
-            double a = points[i];
-            double b = points.length == 1 ? a : points[i + 1];
-            double xa = Math.log(a) + (i == 0 ? 0.0 : SIDE_OFFSET);
-            double xb = Math.log(b) - (i + 2 == points.length || points.length == 1 ? 0.0 : SIDE_OFFSET);
-            if (xb < xa) {
-                xb = xa;
-            }
-            double tMid = deviceSeconds(Math.exp(0.5 * (xa + xb)));
-            double tRight = deviceSeconds(Math.exp(xb));
+        SmoothScan scan = new SmoothScan(this::sample, new DoubleUnaryOperator[] {this::margin, this::logRatio}, 2, 1,
+                fromAmps, toAmps);
+        SegmentWalk.walk(splitPoints(), s -> {
+            double tMid = deviceSeconds(s.midAmps());
+            double tRight = deviceSeconds(s.rightAmps());
             if (Double.isNaN(tMid) || Double.isNaN(tRight)) {
-                undefined.add(a, b);
-                addRegion(regions, a, b, ThermalRegion.UNDEFINED);
-                prevRatioLog = Double.NaN;
-                continue;
+                undefined.add(s.a(), s.b());
+                addRegion(regions, s.a(), s.b(), ThermalRegion.UNDEFINED);
+                scan.interrupt(Double.NaN);
+                return;
             }
             if (Double.isInfinite(tRight)) {
-                notCleared.add(a, b);
-                addRegion(regions, a, b, ThermalRegion.NOT_CLEARED);
-                prevRatioLog = Double.NEGATIVE_INFINITY;
-                continue;
+                notCleared.add(s.a(), s.b());
+                addRegion(regions, s.a(), s.b(), ThermalRegion.NOT_CLEARED);
+                scan.interrupt(Double.NEGATIVE_INFINITY);
+                return;
             }
-            addRegion(regions, a, b, method(tMid));
+            addRegion(regions, s.a(), s.b(), method(tMid));
+            SegmentWalk.Segment seg = s;
             // a pole can only sit where the device starts to operate: at the range start or after a gap
-            boolean afterGap = i == 0 || prevRatioLog == Double.NEGATIVE_INFINITY;
-            if (afterGap && divergesAt(xa)) {
+            boolean afterGap = s.first() || scan.previous() == Double.NEGATIVE_INFINITY;
+            if (afterGap && divergesAt(s.xa())) {
                 // an inverse stage's asymptote at its pickup: the margin has no lower bound there
-                margin.unbounded(a, i == 0);
-                ratio.unbounded(a, i == 0);
-                if (i == 0 && Double.isInfinite(deviceSeconds(a))) {
-                    notCleared.add(a, a);
+                margin.unbounded(s.a(), s.first());
+                ratio.unbounded(s.a(), s.first());
+                if (s.first() && Double.isInfinite(deviceSeconds(s.a()))) {
+                    notCleared.add(s.a(), s.a());
                 }
-                xa = Math.min(xb, xa + LogAxis.DIVERGENCE_PROBE);
+                seg = s.from(Math.min(s.xb(), s.xa() + LogAxis.DIVERGENCE_PROBE));
             }
-            double[] xs = LogAxis.scanPoints(xa, xb);
-            double[] margins = new double[xs.length];
-            double[] ratios = new double[xs.length];
-            for (int k = 0; k < xs.length; k++) {
-                double amps = Math.exp(xs[k]);
-                double te = equivalentSeconds(amps);
-                double tc = cableSeconds(amps);
-                margins[k] = tc - te;
-                ratios[k] = te == 0.0 ? Double.POSITIVE_INFINITY : Math.log(tc / te);
-            }
-            if (i > 0 && !Double.isNaN(prevRatioLog) && crosses(prevRatioLog, ratios[0])) {
-                crossings.add(a);
-            }
-            // minimum time margin and minimum ratio on this smooth segment
-            boolean last = i + 2 == points.length || points.length == 1;
-            margin.offer(LogAxis.minimum(this::margin, xs, margins), a, b, xa, xb, i == 0, last);
-            ratio.offer(LogAxis.minimum(this::logRatio, xs, ratios), a, b, xa, xb, i == 0, last);
-            for (double root : LogAxis.roots(this::logRatio, xs, ratios)) {
-                double amps = Math.exp(root);
-                if (amps > fromAmps && amps < toAmps) {
-                    crossings.add(amps);
-                }
-            }
-            prevRatioLog = ratios[ratios.length - 1];
-            if (points.length == 1) {
-                break;
-            }
-        }
-        double[] c = sortedDistinct(crossings);
+            LogAxis.Point[] minima = scan.scan(seg);
+            margin.offer(minima[0], seg);
+            ratio.offer(minima[1], seg);
+        });
         boolean clearsEverywhere = notCleared.isEmpty() && undefined.isEmpty();
         boolean pass = clearsEverywhere && !Double.isNaN(margin.value())
                 && requirement.isMetBy(margin.value(), Math.exp(ratio.value()));
         return new CableCheckResult(device.id(), cable.id(), fromAmps, toAmps, requirement, pass, margin.value(),
-                margin.at(), margin.side(), Math.exp(ratio.value()), ratio.at(), ratio.side(), c,
+                margin.at(), margin.side(), Math.exp(ratio.value()), ratio.at(), ratio.side(), scan.crossingsAmps(),
                 notCleared.from(), notCleared.to(), undefined.from(), undefined.to(), regions);
+    }
+
+    private void sample(double x, double[] values) {
+        double amps = Math.exp(x);
+        double te = equivalentSeconds(amps);
+        double tc = cableSeconds(amps);
+        values[0] = tc - te;
+        values[1] = te == 0.0 ? Double.POSITIVE_INFINITY : Math.log(tc / te);
     }
 
     private boolean divergesAt(double x) {
         return LogAxis.divergesAt(v -> deviceSeconds(Math.exp(v)), x);
-    }
-
-    static double[] sortedDistinct(List<Double> values) {
-        double[] v = new double[values.size()];
-        for (int k = 0; k < v.length; k++) {
-            v[k] = values.get(k);
-        }
-        Arrays.sort(v);
-        int n = 0;
-        for (int k = 0; k < v.length; k++) {
-            if (n == 0 || v[k] != v[n - 1]) {
-                v[n++] = v[k];
-            }
-        }
-        return n == v.length ? v : Arrays.copyOf(v, n);
-    }
-
-    static boolean crosses(double before, double after) {
-        return before < 0 && after > 0 || before > 0 && after < 0;
     }
 
     private double margin(double x) {
@@ -278,23 +233,20 @@ public final class CableCheck {
                 new double[] {curve.lowestDefinedAmps(), curve.highestDefinedAmps()});
         // window edges: where the clearing time passes 0.1 s and 5 s inside a smooth segment
         double[] edges = new double[2 * base.length];
-        int m = 0;
-        for (int i = 0; i + 1 < base.length; i++) {
-            double xa = Math.log(base[i]) + (i == 0 ? 0 : SIDE_OFFSET);
-            double xb = Math.log(base[i + 1]) - (i + 2 == base.length ? 0 : SIDE_OFFSET);
-            if (!(xb > xa) || Double.isNaN(deviceSeconds(Math.exp(0.5 * (xa + xb))))) {
-                continue;
+        int[] m = {0};
+        SegmentWalk.walk(base, s -> {
+            if (!(s.xb() > s.xa()) || Double.isNaN(deviceSeconds(s.midAmps()))) {
+                return;
             }
             // the clearing time never rises with current, so each limit is passed at most once per segment
-            for (double limit : new double[] {CableThermalLimit.ADIABATIC_MIN_SECONDS,
-                CableThermalLimit.ADIABATIC_MAX_SECONDS}) {
+            for (double limit : WINDOW_EDGES_SECONDS) {
                 double logLimit = Math.log(limit);
-                double r = LogAxis.monotoneRoot(x -> Math.log(deviceSeconds(Math.exp(x))) - logLimit, xa, xb);
+                double r = LogAxis.monotoneRoot(x -> Math.log(deviceSeconds(Math.exp(x))) - logLimit, s.xa(), s.xb());
                 if (!Double.isNaN(r)) {
-                    edges[m++] = Math.exp(r);
+                    edges[m[0]++] = Math.exp(r);
                 }
             }
-        }
-        return LogAxis.splitPoints(fromAmps, toAmps, base, Arrays.copyOf(edges, m));
+        });
+        return LogAxis.splitPoints(fromAmps, toAmps, base, Arrays.copyOf(edges, m[0]));
     }
 }

@@ -5,8 +5,9 @@ import coordination.core.curve.ProtectiveDevice;
 import coordination.core.curve.TimeCurrentCurve;
 import coordination.core.internal.Checks;
 import coordination.core.internal.LogAxis;
-import java.util.ArrayList;
-import java.util.List;
+import coordination.core.internal.SegmentWalk;
+import coordination.core.internal.SmoothScan;
+import java.util.function.DoubleUnaryOperator;
 
 /**
  * Whether two devices in series grade over a current range: the downstream device must clear
@@ -15,8 +16,6 @@ import java.util.List;
  * segment between the breakpoints of both curves, as in {@link CableCheck}.
  */
 public final class GradingCheck {
-    private static final double SIDE_OFFSET = 1e-11;
-
     private final ProtectiveDevice upstream;
     private final ProtectiveDevice downstream;
     private final TimeCurrentCurve up;
@@ -38,12 +37,7 @@ public final class GradingCheck {
      */
     public GradingCheck(ProtectiveDevice upstream, ProtectiveDevice downstream, double fromAmps, double toAmps,
             GradingRequirement requirement) {
-        Checks.positive("grading range: lowest current", fromAmps, "A");
-        Checks.positive("grading range: highest current", toAmps, "A");
-        if (toAmps < fromAmps) {
-            throw new IllegalArgumentException("grading range: highest current " + Checks.format(toAmps)
-                    + " A is below the lowest " + Checks.format(fromAmps) + " A - must be at or above it");
-        }
+        Checks.currentRange("grading range", fromAmps, toAmps);
         this.upstream = upstream;
         this.downstream = downstream;
         this.up = upstream.minimumCurve();
@@ -89,66 +83,39 @@ public final class GradingCheck {
     }
 
     private GradingCheckResult compute() {
-        double[] points = splitPoints();
         RunningMinimum interval = new RunningMinimum();
         CurrentSpan undefined = new CurrentSpan();
-        List<Double> crossings = new ArrayList<>();
-        double prevLog = Double.NaN;
-        int segments = Math.max(1, points.length - 1);
-        for (int i = 0; i < segments; i++) {
-            double a = points[i];
-            double b = points.length == 1 ? a : points[i + 1];
-            boolean first = i == 0;
-            boolean last = i == segments - 1;
-            double xa = Math.log(a) + (first ? 0 : SIDE_OFFSET);
-            double xb = Math.max(xa, Math.log(b) - (last ? 0 : SIDE_OFFSET));
-            double mid = Math.exp(0.5 * (xa + xb));
-            double right = Math.exp(xb);
+        SmoothScan scan = new SmoothScan(this::sample, new DoubleUnaryOperator[] {this::interval, this::logRatio}, 1, 1,
+                fromAmps, toAmps);
+        SegmentWalk.walk(splitPoints(), s -> {
+            double mid = s.midAmps();
+            double right = s.rightAmps();
             if (Double.isNaN(time(up, mid)) || Double.isNaN(time(down, mid))) {
-                undefined.add(a, b);
-                prevLog = Double.NaN;
-                continue;
+                undefined.add(s.a(), s.b());
+                scan.interrupt(Double.NaN);
+                return;
             }
             boolean upOperates = Double.isFinite(time(up, right));
             boolean downOperates = Double.isFinite(time(down, right));
             if (!upOperates) {
-                prevLog = downOperates ? Double.POSITIVE_INFINITY : Double.NaN;
-                continue;
+                scan.interrupt(downOperates ? Double.POSITIVE_INFINITY : Double.NaN);
+                return;
             }
             if (!downOperates) {
-                interval.unbounded(a, first);
-                prevLog = Double.NEGATIVE_INFINITY;
-                continue;
+                interval.unbounded(s.a(), s.first());
+                scan.interrupt(Double.NEGATIVE_INFINITY);
+                return;
             }
-            boolean afterGap = first || prevLog == Double.NEGATIVE_INFINITY || Double.isNaN(prevLog);
-            if (afterGap && LogAxis.divergesAt(v -> time(down, Math.exp(v)), xa)) {
+            SegmentWalk.Segment seg = s;
+            double prev = scan.previous();
+            boolean afterGap = s.first() || prev == Double.NEGATIVE_INFINITY || Double.isNaN(prev);
+            if (afterGap && LogAxis.divergesAt(v -> time(down, Math.exp(v)), s.xa())) {
                 // the downstream curve's asymptote at its pickup: the interval has no lower bound there
-                interval.unbounded(a, first);
-                xa = Math.min(xb, xa + LogAxis.DIVERGENCE_PROBE);
+                interval.unbounded(s.a(), s.first());
+                seg = s.from(Math.min(s.xb(), s.xa() + LogAxis.DIVERGENCE_PROBE));
             }
-            double[] xs = LogAxis.scanPoints(xa, xb);
-            double[] intervals = new double[xs.length];
-            double[] logs = new double[xs.length];
-            for (int k = 0; k < xs.length; k++) {
-                double amps = Math.exp(xs[k]);
-                double tu = time(up, amps);
-                double td = time(down, amps);
-                intervals[k] = tu - td;
-                logs[k] = Math.log(tu) - Math.log(td);
-            }
-            double leftLog = logs[0];
-            if (!first && !Double.isNaN(prevLog) && CableCheck.crosses(prevLog, leftLog)) {
-                crossings.add(a);
-            }
-            interval.offer(LogAxis.minimum(this::interval, xs, intervals), a, b, xa, xb, first, last);
-            for (double r : LogAxis.roots(this::logRatio, xs, logs)) {
-                double amps = Math.exp(r);
-                if (amps > fromAmps && amps < toAmps) {
-                    crossings.add(amps);
-                }
-            }
-            prevLog = logs[logs.length - 1];
-        }
+            interval.offer(scan.scan(seg)[0], seg);
+        });
         double ratio = upstream instanceof Fuse fu && downstream instanceof Fuse fd
                 ? fu.ratingAmps() / fd.ratingAmps() : Double.NaN;
         double minInterval = interval.value();
@@ -161,9 +128,16 @@ public final class GradingCheck {
         } else {
             pass = defined && minInterval > 0;
         }
-        double[] c = CableCheck.sortedDistinct(crossings);
         return new GradingCheckResult(upstream.id(), downstream.id(), fromAmps, toAmps, requirement, pass, minInterval,
-                interval.at(), interval.side(), c, ratio, undefined.from(), undefined.to());
+                interval.at(), interval.side(), scan.crossingsAmps(), ratio, undefined.from(), undefined.to());
+    }
+
+    private void sample(double x, double[] values) {
+        double amps = Math.exp(x);
+        double tu = time(up, amps);
+        double td = time(down, amps);
+        values[0] = tu - td;
+        values[1] = Math.log(tu) - Math.log(td);
     }
 
     private double[] splitPoints() {

@@ -1,6 +1,7 @@
 package coordination.core.margin;
 
 import coordination.core.internal.LogAxis;
+import coordination.core.internal.SegmentWalk;
 
 /**
  * The smallest value met over the segments of a check's range, the current where it occurs and
@@ -16,14 +17,15 @@ final class RunningMinimum {
      * Offers a segment's minimum.
      *
      * @param p the minimum found on the segment, in x = ln(I)
-     * @param a the segment's lower current
-     * @param b its upper current
-     * @param xa the lowest x evaluated (just inside a step)
-     * @param xb the highest x evaluated
-     * @param first whether a is the range's lower end (not a step)
-     * @param last whether b is the range's upper end
+     * @param s the segment, with the ends that were evaluated
      */
-    void offer(LogAxis.Point p, double a, double b, double xa, double xb, boolean first, boolean last) {
+    void offer(LogAxis.Point p, SegmentWalk.Segment s) {
+        double a = s.a();
+        double b = s.b();
+        double xa = s.xa();
+        double xb = s.xb();
+        boolean first = s.first();
+        boolean last = s.last();
         if (!Double.isNaN(value) && !(p.value() < value)) {
             return;
         }

@@ -1,0 +1,129 @@
+package coordination.core.internal;
+
+import java.util.Arrays;
+import java.util.function.DoubleUnaryOperator;
+
+/**
+ * The part of a check that is the same for every check: on each smooth segment, sample a few
+ * functions of x = ln(I) at the scan points, refine the minimum of each minimised function with
+ * Brent's method, and solve every sign change of the crossing function. A sign change between the
+ * end of one segment and the start of the next is a crossing at the step between them. The check
+ * supplies the functions; what they mean and what passes stays with it.
+ */
+public final class SmoothScan {
+    /** Fills the values of every function at one point. */
+    @FunctionalInterface
+    public interface Sampler {
+        /**
+         * Evaluates the functions.
+         *
+         * @param x ln(I)
+         * @param values receives the value of function k at index k
+         */
+        void sample(double x, double[] values);
+    }
+
+    private final Sampler sampler;
+    private final DoubleUnaryOperator[] functions;
+    private final int minimised;
+    private final int crossing;
+    private final double fromAmps;
+    private final double toAmps;
+    private double[] crossings = new double[4];
+    private int crossingCount;
+    private double previous = Double.NaN;
+
+    /**
+     * Creates a scan.
+     *
+     * @param sampler evaluates all functions at once, from one evaluation of each curve
+     * @param functions the same functions one at a time, for the solvers
+     * @param minimised how many functions, from index 0, are minimised
+     * @param crossing index of the function whose sign changes are crossings
+     * @param fromAmps lower end of the range in amperes; roots at the ends are not crossings
+     * @param toAmps upper end of the range in amperes
+     */
+    public SmoothScan(Sampler sampler, DoubleUnaryOperator[] functions, int minimised, int crossing, double fromAmps,
+            double toAmps) {
+        this.sampler = sampler;
+        this.functions = functions.clone();
+        this.minimised = minimised;
+        this.crossing = crossing;
+        this.fromAmps = fromAmps;
+        this.toAmps = toAmps;
+    }
+
+    /**
+     * Scans a smooth segment.
+     *
+     * @param s the segment, with its evaluated lower end
+     * @return the minimum found on the segment of each minimised function, in index order
+     */
+    public LogAxis.Point[] scan(SegmentWalk.Segment s) {
+        double[] xs = LogAxis.scanPoints(s.xa(), s.xb());
+        double[][] values = new double[functions.length][xs.length];
+        double[] at = new double[functions.length];
+        for (int k = 0; k < xs.length; k++) {
+            sampler.sample(xs[k], at);
+            for (int f = 0; f < at.length; f++) {
+                values[f][k] = at[f];
+            }
+        }
+        double[] c = values[crossing];
+        if (!s.first() && !Double.isNaN(previous) && crosses(previous, c[0])) {
+            addCrossing(s.a());
+        }
+        LogAxis.Point[] minima = new LogAxis.Point[minimised];
+        for (int f = 0; f < minimised; f++) {
+            minima[f] = LogAxis.minimum(functions[f], xs, values[f]);
+        }
+        for (double root : LogAxis.roots(functions[crossing], xs, c)) {
+            double amps = Math.exp(root);
+            if (amps > fromAmps && amps < toAmps) {
+                addCrossing(amps);
+            }
+        }
+        previous = c[c.length - 1];
+        return minima;
+    }
+
+    /**
+     * Sets what the crossing function is taken to be at the end of a segment that was not scanned:
+     * NaN where nothing is known (a curve without value), an infinity of the sign the check chooses
+     * where a device does not operate.
+     *
+     * @param value the value
+     */
+    public void interrupt(double value) {
+        previous = value;
+    }
+
+    /** @return the crossing function at the end of the last segment, or the value of the last interrupt */
+    public double previous() {
+        return previous;
+    }
+
+    /** @return the crossings found so far, ascending and distinct, in amperes */
+    public double[] crossingsAmps() {
+        double[] v = Arrays.copyOf(crossings, crossingCount);
+        Arrays.sort(v);
+        int n = 0;
+        for (int k = 0; k < v.length; k++) {
+            if (n == 0 || v[k] != v[n - 1]) {
+                v[n++] = v[k];
+            }
+        }
+        return n == v.length ? v : Arrays.copyOf(v, n);
+    }
+
+    private void addCrossing(double amps) {
+        if (crossingCount == crossings.length) {
+            crossings = Arrays.copyOf(crossings, 2 * crossingCount);
+        }
+        crossings[crossingCount++] = amps;
+    }
+
+    private static boolean crosses(double before, double after) {
+        return before < 0 && after > 0 || before > 0 && after < 0;
+    }
+}
