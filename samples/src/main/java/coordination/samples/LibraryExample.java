@@ -10,7 +10,7 @@ import coordination.core.curve.Relay;
 import coordination.core.margin.CableCheck;
 import coordination.core.margin.CableCheckResult;
 import coordination.core.margin.MarginRequirement;
-import coordination.core.study.ReportJson;
+import coordination.core.study.ReportWriter;
 import coordination.plot.chart.ChartContent;
 import coordination.plot.chart.TimeCurrentChart;
 import coordination.plot.sheet.Drawing;
@@ -44,7 +44,7 @@ public final class LibraryExample {
 
         CableCheckResult result = CableCheck.check(relay, cable, 1_000, 10_000, MarginRequirement.seconds(0.1));
         System.out.println(result);
-        System.out.print(ReportJson.write(result.toJson()));
+        System.out.print(ReportWriter.write(result));
 
         TimeCurrentChart chart = new TimeCurrentChart(new ChartContent("B5 with a 25 mm² cable", 0.4, List.of(relay),
                 List.of(cable), 1_000, 10_000, List.of(result), List.of()), 800, 600);

@@ -1,10 +1,11 @@
 package coordination.samples;
 
+import static org.hamcrest.Matchers.greaterThan;
 import static org.hamcrest.MatcherAssert.assertThat;
 import static org.hamcrest.Matchers.greaterThanOrEqualTo;
 import static org.hamcrest.Matchers.is;
 
-import coordination.core.study.ReportJson;
+import coordination.core.study.ReportWriter;
 import coordination.core.study.Study;
 import coordination.core.study.StudyReader;
 import coordination.core.study.StudyReport;
@@ -42,7 +43,7 @@ class SamplesTest {
     @MethodSource("studies")
     void reportMatchesTheCommittedExpectedReport(Path file) throws Exception {
         Study s = StudyReader.read(file);
-        String json = ReportJson.write(StudyReport.evaluate(s));
+        String json = ReportWriter.write(StudyReport.evaluate(s));
         Path expected = Path.of("expected", s.name() + ".report.json");
         if (Boolean.getBoolean("samples.regenerate")) {
             Files.createDirectories(expected.getParent());
@@ -66,6 +67,6 @@ class SamplesTest {
     @Test
     void libraryExampleRuns(@TempDir Path tmp) throws Exception {
         LibraryExample.main(new String[] {tmp.toString()});
-        assertThat(Files.size(tmp.resolve("library-example.png")) > 10_000, is(true));
+        assertThat(Files.size(tmp.resolve("library-example.png")), greaterThan(10_000L));
     }
 }

@@ -1,10 +1,9 @@
 package coordination.core.margin;
 
 import coordination.core.internal.Checks;
-import java.util.ArrayList;
-import java.util.LinkedHashMap;
+import java.util.Arrays;
 import java.util.List;
-import java.util.Map;
+import java.util.Objects;
 
 /**
  * The outcome of a {@link CableCheck}. Margins are taken over the part of the range where the
@@ -47,7 +46,7 @@ public record CableCheckResult(
         double notClearedToAmps,
         double undefinedFromAmps,
         double undefinedToAmps,
-        List<ThermalRegion> regions) {
+        List<ThermalRegion> regions) implements CheckResult {
 
     /** Copies the arrays and lists in. */
     public CableCheckResult {
@@ -60,7 +59,7 @@ public record CableCheckResult(
         return crossingsAmps.clone();
     }
 
-    /** @return a one-line explanation of the verdict */
+    @Override
     public String reason() {
         if (!Double.isNaN(undefinedFromAmps)) {
             return "the curve of '" + device + "' has no value from " + Checks.format(undefinedFromAmps) + " A to "
@@ -79,67 +78,33 @@ public record CableCheckResult(
         return (pass ? "meets " : "fails ") + requirement + ": " + where;
     }
 
-    /**
-     * The stable JSON form: snake_case keys, SI units in the names, numbers as plain numbers and
-     * null where a value does not exist (documented in {@code spec/report-format.md}).
-     *
-     * @return an ordered map of JSON values
-     */
-    public Map<String, Object> toJson() {
-        Map<String, Object> m = new LinkedHashMap<>();
-        m.put("kind", "cable");
-        m.put("device", device);
-        m.put("cable", cable);
-        m.put("pass", pass);
-        if (requirement instanceof MarginRequirement.Seconds s) {
-            m.put("required_margin_s", s.seconds());
-        } else if (requirement instanceof MarginRequirement.Ratio r) {
-            m.put("required_ratio", r.ratio());
-        }
-        m.put("range_a", List.of(fromAmps, toAmps));
-        m.put("min_margin_s", number(minMarginSeconds));
-        m.put("min_margin_at_a", number(minMarginAtAmps));
-        m.put("min_margin_side", Double.isNaN(minMarginSeconds) ? null : minMarginSide.key());
-        m.put("min_ratio", number(minRatio));
-        m.put("min_ratio_at_a", number(minRatioAtAmps));
-        List<Double> crossings = new ArrayList<>();
-        for (double c : crossingsAmps) {
-            crossings.add(c);
-        }
-        m.put("crossings_a", crossings);
-        m.put("not_cleared_a", Double.isNaN(notClearedFromAmps) ? null : List.of(notClearedFromAmps, notClearedToAmps));
-        m.put("undefined_a", Double.isNaN(undefinedFromAmps) ? null : List.of(undefinedFromAmps, undefinedToAmps));
-        List<Map<String, Object>> methods = new ArrayList<>();
-        for (ThermalRegion r : regions) {
-            Map<String, Object> e = new LinkedHashMap<>();
-            e.put("from_a", r.fromAmps());
-            e.put("to_a", r.toAmps());
-            e.put("method", r.method());
-            methods.add(e);
-        }
-        m.put("methods", methods);
-        m.put("reason", reason());
-        return m;
-    }
-
-    static Double number(double v) {
-        return Double.isFinite(v) ? v : null;
-    }
-
     @Override
     public String toString() {
         return "cable check '" + device + "' -> '" + cable + "' " + Checks.format(fromAmps) + " A to "
                 + Checks.format(toAmps) + " A: " + (pass ? "PASS" : "FAIL") + ", " + reason()
-                + (crossingsAmps.length > 0 ? ", crossings " + java.util.Arrays.toString(crossingsAmps) + " A" : "");
+                + (crossingsAmps.length > 0 ? ", crossings " + Arrays.toString(crossingsAmps) + " A" : "");
     }
 
+    // component by component, as a record compares, with the array compared by content
     @Override
     public boolean equals(Object o) {
-        return o instanceof CableCheckResult r && toJson().equals(r.toJson());
+        return o instanceof CableCheckResult r && device.equals(r.device) && cable.equals(r.cable)
+                && Double.compare(fromAmps, r.fromAmps) == 0 && Double.compare(toAmps, r.toAmps) == 0
+                && requirement.equals(r.requirement) && pass == r.pass
+                && Double.compare(minMarginSeconds, r.minMarginSeconds) == 0
+                && Double.compare(minMarginAtAmps, r.minMarginAtAmps) == 0 && minMarginSide == r.minMarginSide
+                && Double.compare(minRatio, r.minRatio) == 0 && Double.compare(minRatioAtAmps, r.minRatioAtAmps) == 0
+                && minRatioSide == r.minRatioSide && Arrays.equals(crossingsAmps, r.crossingsAmps)
+                && Double.compare(notClearedFromAmps, r.notClearedFromAmps) == 0
+                && Double.compare(notClearedToAmps, r.notClearedToAmps) == 0
+                && Double.compare(undefinedFromAmps, r.undefinedFromAmps) == 0
+                && Double.compare(undefinedToAmps, r.undefinedToAmps) == 0 && regions.equals(r.regions);
     }
 
     @Override
     public int hashCode() {
-        return toJson().hashCode();
+        return Objects.hash(device, cable, fromAmps, toAmps, requirement, pass, minMarginSeconds, minMarginAtAmps,
+                minMarginSide, minRatio, minRatioAtAmps, minRatioSide, Arrays.hashCode(crossingsAmps),
+                notClearedFromAmps, notClearedToAmps, undefinedFromAmps, undefinedToAmps, regions);
     }
 }

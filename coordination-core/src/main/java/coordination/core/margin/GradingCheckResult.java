@@ -1,10 +1,8 @@
 package coordination.core.margin;
 
 import coordination.core.internal.Checks;
-import java.util.ArrayList;
-import java.util.LinkedHashMap;
-import java.util.List;
-import java.util.Map;
+import java.util.Arrays;
+import java.util.Objects;
 
 /**
  * The outcome of a {@link GradingCheck}.
@@ -38,7 +36,7 @@ public record GradingCheckResult(
         double[] crossingsAmps,
         double ratingRatio,
         double undefinedFromAmps,
-        double undefinedToAmps) {
+        double undefinedToAmps) implements CheckResult {
 
     /** Copies the array in. */
     public GradingCheckResult {
@@ -55,7 +53,7 @@ public record GradingCheckResult(
         return requirement instanceof GradingRequirement.Interval i ? i.seconds() : 0.0;
     }
 
-    /** @return a one-line explanation of the verdict */
+    @Override
     public String reason() {
         if (!Double.isNaN(undefinedFromAmps)) {
             return "a curve has no value from " + Checks.format(undefinedFromAmps) + " A to "
@@ -76,52 +74,29 @@ public record GradingCheckResult(
         return (pass ? "meets " : "fails ") + requirement + ": " + s;
     }
 
-    /**
-     * The stable JSON form (documented in {@code spec/report-format.md}).
-     *
-     * @return an ordered map of JSON values
-     */
-    public Map<String, Object> toJson() {
-        Map<String, Object> m = new LinkedHashMap<>();
-        m.put("kind", "grading");
-        m.put("upstream", upstream);
-        m.put("downstream", downstream);
-        m.put("pass", pass);
-        m.put("range_a", List.of(fromAmps, toAmps));
-        m.put("required_s", requiredSeconds());
-        if (requirement instanceof GradingRequirement.RatingRatio r) {
-            m.put("required_rating_ratio", r.ratio());
-            m.put("rating_ratio", CableCheckResult.number(ratingRatio));
-        }
-        if (requirement instanceof GradingRequirement.NoOverlap) {
-            m.put("required_no_overlap", true);
-        }
-        m.put("min_interval_s", CableCheckResult.number(minIntervalSeconds));
-        m.put("min_interval_at_a", CableCheckResult.number(minIntervalAtAmps));
-        m.put("min_interval_side", Double.isNaN(minIntervalAtAmps) ? null : minIntervalSide.key());
-        List<Double> crossings = new ArrayList<>();
-        for (double c : crossingsAmps) {
-            crossings.add(c);
-        }
-        m.put("crossings_a", crossings);
-        m.put("undefined_a", Double.isNaN(undefinedFromAmps) ? null : List.of(undefinedFromAmps, undefinedToAmps));
-        m.put("reason", reason());
-        return m;
-    }
-
     @Override
     public String toString() {
         return "grading check '" + upstream + "' over '" + downstream + "' " + Checks.format(fromAmps) + " A to "
                 + Checks.format(toAmps) + " A: " + (pass ? "PASS" : "FAIL") + ", " + reason();
     }
 
+    // component by component, as a record compares, with the array compared by content
     @Override
     public boolean equals(Object o) {
-        return o instanceof GradingCheckResult r && toJson().equals(r.toJson());
+        return o instanceof GradingCheckResult r && upstream.equals(r.upstream) && downstream.equals(r.downstream)
+                && Double.compare(fromAmps, r.fromAmps) == 0 && Double.compare(toAmps, r.toAmps) == 0
+                && requirement.equals(r.requirement) && pass == r.pass
+                && Double.compare(minIntervalSeconds, r.minIntervalSeconds) == 0
+                && Double.compare(minIntervalAtAmps, r.minIntervalAtAmps) == 0 && minIntervalSide == r.minIntervalSide
+                && Arrays.equals(crossingsAmps, r.crossingsAmps) && Double.compare(ratingRatio, r.ratingRatio) == 0
+                && Double.compare(undefinedFromAmps, r.undefinedFromAmps) == 0
+                && Double.compare(undefinedToAmps, r.undefinedToAmps) == 0;
     }
 
     @Override
     public int hashCode() {
-        return toJson().hashCode();
+        return Objects.hash(upstream, downstream, fromAmps, toAmps, requirement, pass, minIntervalSeconds,
+                minIntervalAtAmps, minIntervalSide, Arrays.hashCode(crossingsAmps), ratingRatio, undefinedFromAmps,
+                undefinedToAmps);
     }
 }

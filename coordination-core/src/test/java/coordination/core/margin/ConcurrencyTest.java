@@ -28,9 +28,9 @@ class ConcurrencyTest {
         CableThermalLimit cable = CableThermalLimit.of("C", ConductorMaterial.COPPER, Insulation.XLPE, 50, 1);
         List<Object> expected = new ArrayList<>();
         for (ProtectiveDevice d : devices) {
-            expected.add(CableCheck.check(d, cable, 500, 20_000, MarginRequirement.seconds(0.1)).toJson());
+            expected.add(CableCheck.check(d, cable, 500, 20_000, MarginRequirement.seconds(0.1)));
             expected.add(GradingCheck.check(devices.get(0), d, 500, 20_000, GradingRequirement.intervalSeconds(0.3))
-                    .toJson());
+                    );
         }
         ExecutorService pool = Executors.newFixedThreadPool(8);
         try {
@@ -39,9 +39,9 @@ class ConcurrencyTest {
                 futures.add(pool.submit(() -> {
                     List<Object> got = new ArrayList<>();
                     for (ProtectiveDevice d : devices) {
-                        got.add(CableCheck.check(d, cable, 500, 20_000, MarginRequirement.seconds(0.1)).toJson());
+                        got.add(CableCheck.check(d, cable, 500, 20_000, MarginRequirement.seconds(0.1)));
                         got.add(GradingCheck.check(devices.get(0), d, 500, 20_000,
-                                GradingRequirement.intervalSeconds(0.3)).toJson());
+                                GradingRequirement.intervalSeconds(0.3)));
                     }
                     return got;
                 }));

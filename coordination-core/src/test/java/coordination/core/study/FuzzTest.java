@@ -1,5 +1,7 @@
 package coordination.core.study;
 
+import static org.hamcrest.Matchers.not;
+import static org.hamcrest.Matchers.empty;
 import static org.hamcrest.MatcherAssert.assertThat;
 import static org.hamcrest.Matchers.greaterThanOrEqualTo;
 import static org.hamcrest.Matchers.is;
@@ -97,10 +99,10 @@ class FuzzTest {
             try {
                 Study s = StudyReader.parse("fuzz.yaml", "fuzz", input);
                 StudyReport report = StudyReport.evaluate(s);
-                ReportJson.write(report);
+                ReportWriter.write(report);
                 studies++;
             } catch (StudyFileException e) {
-                assertThat(e.problems().isEmpty(), is(false));
+                assertThat(e.problems(), not(empty()));
                 for (Problem p : e.problems()) {
                     if (!PROBLEM.matcher(p.toString()).matches() || p.toString().contains("Exception")) {
                         fail("input " + n + " (seed " + SEED + ") gave an unclean problem: " + p + "\n" + input);

@@ -1,0 +1,318 @@
+package coordination.core.study;
+
+import coordination.core.cable.CableThermalLimit;
+import coordination.core.cable.WithstandTable;
+import coordination.core.curve.DefiniteTimeStage;
+import coordination.core.curve.Fuse;
+import coordination.core.curve.InverseTimeStage;
+import coordination.core.curve.MiniatureBreaker;
+import coordination.core.curve.ProtectiveDevice;
+import coordination.core.curve.Relay;
+import coordination.core.curve.TimeCurrentCurve;
+import coordination.core.curve.TripUnitBreaker;
+import coordination.core.design.MinimumConductor;
+import coordination.core.design.RadialGrading;
+import coordination.core.design.SlowestSetting;
+import coordination.core.margin.CableCheckResult;
+import coordination.core.margin.CheckResult;
+import coordination.core.margin.GradingCheckResult;
+import coordination.core.margin.GradingRequirement;
+import coordination.core.margin.MarginRequirement;
+import coordination.core.margin.ThermalRegion;
+import java.util.List;
+
+/**
+ * The one writer of the project's JSON: the study report ({@code spec/report-format.md}), the form
+ * for several studies, the design proposals and the withstand table. Keys keep a fixed order and
+ * numbers their full precision, so the same input always gives the same bytes.
+ */
+public final class ReportWriter {
+    private ReportWriter() {
+    }
+
+    /**
+     * The report of one study.
+     *
+     * @param report the evaluated study
+     * @return the JSON text, ending with a newline
+     */
+    public static String write(StudyReport report) {
+        JsonOut j = new JsonOut();
+        report(j, report);
+        return j.finish();
+    }
+
+    /**
+     * The reports of several studies: {@code {"format", "pass", "studies"}}.
+     *
+     * @param reports the evaluated studies
+     * @param pass whether every study was read and every check passes
+     * @return the JSON text
+     */
+    public static String write(List<StudyReport> reports, boolean pass) {
+        JsonOut j = new JsonOut().startObject();
+        j.integer("format", StudyReport.FORMAT).bool("pass", pass).startArray("studies");
+        for (StudyReport r : reports) {
+            report(j, r);
+        }
+        return j.endArray().endObject().finish();
+    }
+
+    /**
+     * One check's result, as it appears in a report's {@code checks}.
+     *
+     * @param result the result
+     * @return the JSON text
+     */
+    public static String write(CheckResult result) {
+        JsonOut j = new JsonOut();
+        check(j, result);
+        return j.finish();
+    }
+
+    /**
+     * The design proposals of a study.
+     *
+     * @param design the proposals
+     * @return the JSON text
+     */
+    public static String write(StudyDesign design) {
+        JsonOut j = new JsonOut().startObject();
+        j.text("study", design.study().name()).text("title", design.study().title());
+        j.startArray("cable_checks");
+        for (StudyDesign.CableAid a : design.cableAids()) {
+            cableAid(j, a);
+        }
+        j.endArray().startArray("grading_chains");
+        for (StudyDesign.GradingChain c : design.chains()) {
+            j.startObject().number("interval_s", c.intervalSeconds()).startArray("relays");
+            for (RadialGrading.Setting s : c.relays()) {
+                j.startObject().text("relay", s.id()).number("now", s.currentMultiplier())
+                        .number("proposed", s.multiplier())
+                        .number("min_interval_s", s.grading() == null ? Double.NaN : s.grading().minIntervalSeconds())
+                        .number("cable_min_margin_s", s.cable() == null ? Double.NaN : s.cable().minMarginSeconds())
+                        .text("problem", s.problem()).endObject();
+            }
+            j.endArray().endObject();
+        }
+        return j.endArray().endObject().finish();
+    }
+
+    /**
+     * A withstand table.
+     *
+     * @param table the table
+     * @return the JSON text
+     */
+    public static String write(WithstandTable table) {
+        CableThermalLimit first = table.rows().get(0).cable();
+        JsonOut j = new JsonOut().startObject();
+        j.text("conductor", first.material().key()).text("insulation", first.insulation().key())
+                .text("method", first.method().key()).startArray("sizes");
+        double[] times = table.timesSeconds();
+        for (WithstandTable.Row row : table.rows()) {
+            CableThermalLimit c = row.cable();
+            j.startObject().text("size", row.label()).number("size_mm2", c.sizeMm2()).integer("parallel", c.parallel())
+                    .number("k", c.k()).number("initial_c", c.initialCelsius()).number("final_c", c.finalCelsius())
+                    .number("i2t_a2s", c.i2tA2s()).startArray("withstand");
+            double[] amps = row.withstandAmps(times);
+            for (int i = 0; i < times.length; i++) {
+                j.startObject().number("time_s", times[i]).number("withstand_a", amps[i]).endObject();
+            }
+            j.endArray().endObject();
+        }
+        return j.endArray().endObject().finish();
+    }
+
+    // --------------------------------------------------------------------------------------- report
+
+    private static void report(JsonOut j, StudyReport report) {
+        Study study = report.study();
+        j.startObject().integer("format", StudyReport.FORMAT).text("study", study.name()).text("title", study.title())
+                .text("revision", study.revision().isEmpty() ? null : study.revision())
+                .text("date", study.date().isEmpty() ? null : study.date())
+                .number("reference_voltage_kv", study.voltageKv()).number("frequency_hz", study.frequencyHz())
+                .bool("pass", report.pass());
+        j.startArray("checks");
+        for (CheckResult r : report.results()) {
+            check(j, r);
+        }
+        j.endArray().startArray("cables");
+        for (Study.StudyCable c : study.cables()) {
+            cable(j, c);
+        }
+        j.endArray().startArray("devices");
+        for (Study.StudyDevice d : study.devices()) {
+            device(j, d);
+        }
+        j.endArray().endObject();
+    }
+
+    private static void check(JsonOut j, CheckResult result) {
+        if (result instanceof CableCheckResult c) {
+            cableCheck(j, c);
+        } else if (result instanceof GradingCheckResult g) {
+            gradingCheck(j, g);
+        }
+    }
+
+    private static void cableCheck(JsonOut j, CableCheckResult r) {
+        j.startObject().text("kind", "cable").text("device", r.device()).text("cable", r.cable()).bool("pass", r.pass());
+        if (r.requirement() instanceof MarginRequirement.Seconds s) {
+            j.number("required_margin_s", s.seconds());
+        } else if (r.requirement() instanceof MarginRequirement.Ratio ratio) {
+            j.number("required_ratio", ratio.ratio());
+        }
+        j.pair("range_a", r.fromAmps(), r.toAmps()).number("min_margin_s", r.minMarginSeconds())
+                .number("min_margin_at_a", r.minMarginAtAmps())
+                .text("min_margin_side", Double.isNaN(r.minMarginSeconds()) ? null : r.minMarginSide().key())
+                .number("min_ratio", r.minRatio()).number("min_ratio_at_a", r.minRatioAtAmps())
+                .numbers("crossings_a", r.crossingsAmps());
+        span(j, "not_cleared_a", r.notClearedFromAmps(), r.notClearedToAmps());
+        span(j, "undefined_a", r.undefinedFromAmps(), r.undefinedToAmps());
+        j.startArray("methods");
+        for (ThermalRegion region : r.regions()) {
+            j.startObject().number("from_a", region.fromAmps()).number("to_a", region.toAmps())
+                    .text("method", region.method()).endObject();
+        }
+        j.endArray().text("reason", r.reason()).endObject();
+    }
+
+    private static void gradingCheck(JsonOut j, GradingCheckResult r) {
+        j.startObject().text("kind", "grading").text("upstream", r.upstream()).text("downstream", r.downstream())
+                .bool("pass", r.pass()).pair("range_a", r.fromAmps(), r.toAmps())
+                .number("required_s", r.requiredSeconds());
+        if (r.requirement() instanceof GradingRequirement.RatingRatio ratio) {
+            j.number("required_rating_ratio", ratio.ratio()).number("rating_ratio", r.ratingRatio());
+        }
+        if (r.requirement() instanceof GradingRequirement.NoOverlap) {
+            j.bool("required_no_overlap", true);
+        }
+        j.number("min_interval_s", r.minIntervalSeconds()).number("min_interval_at_a", r.minIntervalAtAmps())
+                .text("min_interval_side", Double.isNaN(r.minIntervalAtAmps()) ? null : r.minIntervalSide().key())
+                .numbers("crossings_a", r.crossingsAmps());
+        span(j, "undefined_a", r.undefinedFromAmps(), r.undefinedToAmps());
+        j.text("reason", r.reason()).endObject();
+    }
+
+    private static void span(JsonOut j, String key, double from, double to) {
+        if (Double.isNaN(from)) {
+            j.nullValue(key);
+        } else {
+            j.pair(key, from, to);
+        }
+    }
+
+    private static void cable(JsonOut j, Study.StudyCable c) {
+        CableThermalLimit l = c.limit();
+        j.startObject().text("id", l.id()).text("conductor", l.material().key()).text("insulation", l.insulation().key())
+                .text("size", c.sizeText()).number("size_mm2", l.sizeMm2()).integer("parallel", l.parallel())
+                .number("initial_c", l.initialCelsius()).number("final_c", l.finalCelsius())
+                .text("method", l.method().key()).number("k", l.k()).number("i2t_a2s", l.i2tA2s())
+                .number("withstand_0_1s_a", l.withstandAmps(0.1)).number("withstand_1s_a", l.withstandAmps(1.0))
+                .number("withstand_5s_a", l.withstandAmps(5.0));
+        if (c.fault().isPresent()) {
+            j.pair("fault_a", c.fault().get().fromAmps(), c.fault().get().toAmps());
+        } else {
+            j.nullValue("fault_a");
+        }
+        j.endObject();
+    }
+
+    // -------------------------------------------------------------------------------------- devices
+
+    private static void device(JsonOut j, Study.StudyDevice d) {
+        ProtectiveDevice device = d.device();
+        double f = d.referralFactor();
+        j.startObject().text("id", d.id()).text("kind", device.kind().key()).number("voltage_kv", d.voltageKv())
+                .number("referral_factor", f);
+        if (device instanceof Relay relay) {
+            j.number("breaker_s", relay.breakerSeconds());
+            if (relay.currentTransformer().isPresent()) {
+                j.pair("ct_a", relay.currentTransformer().get().primaryAmps(),
+                        relay.currentTransformer().get().secondaryAmps());
+            } else {
+                j.nullValue("ct_a");
+            }
+            j.startArray("stages");
+            for (TimeCurrentCurve s : relay.stages()) {
+                stage(j, s, relay.ctRatio(), f);
+            }
+            j.endArray();
+        } else if (device instanceof Fuse fuse) {
+            j.number("rating_a", fuse.ratingAmps())
+                    .integer("melting_points", fuse.minimumCurve().amps().length)
+                    .integer("clearing_points", fuse.maximumCurve().amps().length)
+                    .number("clearing_i2t_a2s", fuse.clearingI2tA2s().orElse(Double.NaN))
+                    .number("clearing_i2t_referred_a2s", fuse.clearingI2tA2s().orElse(Double.NaN) * f * f);
+        } else if (device instanceof TripUnitBreaker breaker) {
+            TripUnitBreaker.Settings s = breaker.settings();
+            j.number("ir_a", s.irAmps()).number("ir_referred_a", s.irAmps() * f).number("tr_s", s.trSeconds())
+                    .number("isd_a", s.isdAmps()).number("isd_referred_a", s.isdAmps() * f)
+                    .number("tsd_s", Double.isFinite(s.isdAmps()) ? s.tsdSeconds() : Double.NaN)
+                    .bool("tsd_i2t", s.shortTimeI2t()).number("ii_a", s.iiAmps()).number("ii_referred_a", s.iiAmps() * f)
+                    .number("pickup_tolerance", s.pickupTolerance()).number("time_tolerance", s.timeTolerance())
+                    .pair("long_time_band", s.longTimeLowMultiple(), s.longTimeHighMultiple())
+                    .pair("instantaneous_s", s.instantaneousMinSeconds(), s.instantaneousMaxSeconds());
+        } else if (device instanceof MiniatureBreaker mcb) {
+            j.text("curve_type", mcb.type().name()).number("rating_a", mcb.ratedAmps())
+                    .number("rating_referred_a", mcb.ratedAmps() * f).number("fastest_s", mcb.fastestSeconds())
+                    .number("let_through_i2t_a2s", mcb.letThroughI2tA2s());
+        }
+        j.endObject();
+    }
+
+    private static void stage(JsonOut j, TimeCurrentCurve s, double ctRatio, double factor) {
+        j.startObject();
+        if (s instanceof InverseTimeStage inv) {
+            j.text("curve", inv.label());
+            pickups(j, inv.pickupAmps(), ctRatio, factor);
+            j.text("multiplier_kind", inv.multiplierKind().key()).number("multiplier", inv.multiplier())
+                    .pair("multiplier_range", inv.multiplierRange().min(), inv.multiplierRange().max())
+                    .text("high_current", inv.highCurrent().key()).number("upper_multiple", inv.upperMultiple());
+        } else if (s instanceof DefiniteTimeStage dt) {
+            j.text("curve", dt.instantaneous() ? "instantaneous" : "definite-time");
+            pickups(j, dt.pickupAmps(), ctRatio, factor);
+            j.number("delay_s", dt.delaySeconds());
+        } else {
+            j.text("curve", s.toString());
+        }
+        j.endObject();
+    }
+
+    private static void pickups(JsonOut j, double pickup, double ctRatio, double factor) {
+        j.number("pickup_a", pickup).number("pickup_primary_a", pickup * ctRatio)
+                .number("pickup_referred_a", pickup * ctRatio * factor);
+    }
+
+    // --------------------------------------------------------------------------------------- design
+
+    private static void cableAid(JsonOut j, StudyDesign.CableAid a) {
+        Study.CableCheckSpec spec = a.check();
+        j.startObject().text("cable", spec.cable()).text("device", spec.device())
+                .pair("range_a", spec.range().fromAmps(), spec.range().toAmps())
+                .text("requirement", spec.requirement().toString());
+        MinimumConductor.Result size = a.conductor();
+        CableThermalLimit limit = a.cable().limit();
+        j.startObject("conductor").text("now", a.cable().sizeText()).number("now_mm2", limit.sizeMm2())
+                .integer("parallel", limit.parallel()).number("smallest_mm2", size.sizeMm2())
+                .number("next_iec_mm2", size.found() ? size.iecSizeMm2() : Double.NaN)
+                .text("next_awg_kcmil", size.found() ? size.awgOrKcmil() : null).text("problem", size.reason())
+                .endObject();
+        if (a.stage().isPresent()) {
+            StudyDesign.StageAid s = a.stage().get();
+            j.text("stage", s.stage().label());
+            j.startObject(s.stage().multiplierKind().key());
+            setting(j, s.multiplier());
+            j.bool("at_relay_limit", s.multiplierAtRelayLimit()).endObject();
+            j.startObject("pickup_a");
+            setting(j, s.pickup());
+            j.endObject();
+        }
+        j.endObject();
+    }
+
+    private static void setting(JsonOut j, SlowestSetting.Result r) {
+        j.number("now", r.current()).number("largest", r.largest()).text("problem", r.reason());
+    }
+}
