@@ -116,6 +116,11 @@ valid["grading-breakers-no-overlap"] = (HEAD.format(title="Breakers without over
     + "  - {id: QU, type: breaker, ir_a: 1250, tr_s: 12, isd_a: 6000, tsd_s: 0.3}\n"
     + "  - {id: QD, type: breaker, ir_a: 250, tr_s: 5, isd_a: 1500, tsd_s: 0.05, ii_a: 3000}\n"
     + "checks:\n  - {upstream: QU, downstream: QD, no_overlap: true, range_ka: {min: 1, max: 5}}\n")
+valid["relay-custom-time-dial"] = (HEAD.format(title="Custom curve set by time dial", kv=0.4) + "cables:\n" + CABLE
+    + "devices:\n  - id: R1\n    type: relay\n    breaker_s: 0.05\n    stages:\n"
+    + "      - {curve: custom, pickup_a: 300, a_s: 19.61, b_s: 0.491, p: 2, time_dial: 5, time_dial_range: [0.5, 15]}\n"
+    + "      - {curve: definite-time, pickup_a: 3000, delay_s: 0.1}\n"
+    + "checks:\n  - {cable: C1, device: R1, margin_s: 0.1}\n")
 valid["empty-checks"] = HEAD.format(title="A study with nothing to check yet", kv=11) + "devices:\n" + RELAY
 
 BASE_LINES = BASE
@@ -155,6 +160,9 @@ invalid = {
     "relay-unknown-curve": BASE.replace("iec-standard-inverse", "iec-normal-inverse"),
     "relay-negative-breaker": BASE.replace("breaker_s: 0.05", "breaker_s: -0.05"),
     "relay-ct-missing-secondary": BASE.replace("breaker_s: 0.05", "breaker_s: 0.05\n    ct: {primary_a: 400}"),
+    "relay-multiplier-outside-range": BASE.replace("tms: 0.2}", "tms: 1.2, tms_range: [0.05, 1.0]}"),
+    "relay-range-of-other-kind": BASE.replace("curve: iec-standard-inverse, pickup_a: 250, tms: 0.2",
+        "curve: ieee-very-inverse, pickup_a: 250, time_dial: 2, tms_range: [0.05, 1]"),
     "relay-hold-bad-multiple": BASE.replace("tms: 0.2}", "tms: 0.2, high_current: hold, upper_multiple: 1}"),
     "fuse-rising-curve": HEAD.format(title="Rising fuse", kv=0.4) + "devices:\n  - id: F1\n    type: fuse\n    rating_a: 100\n"
         "    melting: [[200, 100], [400, 10], [800, 1]]\n    clearing: [[200, 120], [400, 12], [800, 30]]\n",

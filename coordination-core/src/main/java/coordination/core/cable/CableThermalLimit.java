@@ -2,6 +2,7 @@ package coordination.core.cable;
 
 import coordination.core.CoordinationException;
 import coordination.core.internal.Checks;
+import java.util.Optional;
 
 /**
  * The short-circuit thermal limit of a cable: how long its conductors may carry a current before
@@ -50,15 +51,29 @@ public record CableThermalLimit(String id, ConductorMaterial material, Insulatio
         }
         Checks.inRange(who + ": initial temperature", initialCelsius, -50, 400, "°C");
         Checks.inRange(who + ": final temperature", finalCelsius, -50, 1000, "°C");
-        if (!(finalCelsius > initialCelsius)) {
-            throw new IllegalArgumentException(who + ": initial temperature " + Checks.format(initialCelsius)
-                    + " °C is not below the final temperature " + Checks.format(finalCelsius)
-                    + " °C - the initial temperature must be below the final one");
-        }
+        temperatureProblem(initialCelsius, finalCelsius).ifPresent(p -> {
+            throw new IllegalArgumentException(who + ": " + p);
+        });
         if (method == ThermalMethod.NON_ADIABATIC && Double.isNaN(insulation.nonAdiabaticX(material))) {
             throw new IllegalArgumentException(who + ": the non-adiabatic method has no constants for "
                     + material.key() + " in " + insulation.key() + " insulation - use adiabatic");
         }
+    }
+
+    /**
+     * The rule that a conductor's initial temperature lies below its final one, as a message.
+     *
+     * @param initialCelsius temperature at the start of the fault, °C
+     * @param finalCelsius permitted temperature at its end, °C
+     * @return what is wrong, or empty when the final temperature is above the initial one
+     */
+    public static Optional<String> temperatureProblem(double initialCelsius, double finalCelsius) {
+        if (finalCelsius > initialCelsius) {
+            return Optional.empty();
+        }
+        return Optional.of("initial temperature " + Checks.format(initialCelsius)
+                + " °C is not below the final temperature " + Checks.format(finalCelsius)
+                + " °C - the initial temperature must be below the final one");
     }
 
     /**

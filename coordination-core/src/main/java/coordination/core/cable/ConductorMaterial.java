@@ -60,10 +60,9 @@ public enum ConductorMaterial {
      * @throws IllegalArgumentException if the final temperature is not above the initial one
      */
     public double k(double initialCelsius, double finalCelsius) {
-        if (!(finalCelsius > initialCelsius)) {
-            throw new IllegalArgumentException("temperatures: initial " + initialCelsius + " °C, final " + finalCelsius
-                    + " °C - the final temperature must be above the initial one");
-        }
+        CableThermalLimit.temperatureProblem(initialCelsius, finalCelsius).ifPresent(p -> {
+            throw new IllegalArgumentException(key + ": " + p);
+        });
         return kConstant * Math.sqrt(Math.log((finalCelsius + beta) / (initialCelsius + beta)));
     }
 

@@ -70,9 +70,9 @@ public enum InverseTimeFamily {
         return resetSeconds;
     }
 
-    /** @return whether the family is one of the IEEE C37.112 curves, set by time dial */
-    public boolean isIeee() {
-        return bSeconds != 0.0;
+    /** @return how the family's multiplier is set: the IEEE C37.112 curves by time dial, the IEC ones by TMS */
+    public MultiplierKind multiplierKind() {
+        return key.startsWith("ieee-") ? MultiplierKind.TIME_DIAL : MultiplierKind.TMS;
     }
 
     /**

@@ -14,6 +14,8 @@ import coordination.core.internal.Checks;
  * @param resetConstantSeconds reset constant tr in seconds, or NaN if none
  * @param pickupAmps pickup current Ip in amperes, above 0
  * @param multiplier time multiplier setting (TMS) or time dial (TD), above 0
+ * @param multiplierKind whether the multiplier is a TMS or a time dial
+ * @param multiplierRange the settings the relay offers for the multiplier
  * @param highCurrent behaviour above {@code upperMultiple * Ip}
  * @param upperMultiple multiple of pickup above which {@code highCurrent} applies, above 1
  * @param label a name for messages, e.g. the family key
@@ -25,6 +27,8 @@ public record InverseTimeStage(
         double resetConstantSeconds,
         double pickupAmps,
         double multiplier,
+        MultiplierKind multiplierKind,
+        SettingRange multiplierRange,
         HighCurrentBehaviour highCurrent,
         double upperMultiple,
         String label) implements TimeCurrentCurve {
@@ -38,11 +42,20 @@ public record InverseTimeStage(
      * @throws IllegalArgumentException if a constant or setting is out of its range
      */
     public InverseTimeStage {
+        if (label == null) {
+            throw new IllegalArgumentException("inverse-time stage: label: found null - must be given");
+        }
         Checks.positive(label + ": constant A", aSeconds, "s");
         Checks.nonNegative(label + ": constant B", bSeconds, "s");
         Checks.positive(label + ": exponent p", exponent, "");
         Checks.positive(label + ": pickup", pickupAmps, "A");
         Checks.positive(label + ": time multiplier", multiplier, "");
+        if (!Double.isNaN(resetConstantSeconds)) {
+            Checks.positive(label + ": reset constant", resetConstantSeconds, "s");
+        }
+        if (multiplierKind == null || multiplierRange == null) {
+            throw new IllegalArgumentException(label + ": multiplier kind and range: found null - both must be given");
+        }
         if (!(upperMultiple > 1.0) || !Double.isFinite(upperMultiple)) {
             throw new IllegalArgumentException(label + ": upper multiple: found " + Checks.format(upperMultiple)
                     + " - must be a finite number above 1");
@@ -58,12 +71,41 @@ public record InverseTimeStage(
      * @param family the standard curve
      * @param pickupAmps pickup current in amperes, above 0
      * @param multiplier TMS for IEC families, time dial for IEEE families, above 0
-     * @return the stage
+     * @return the stage, with the kind's default setting range widened to the multiplier if need be
      * @throws IllegalArgumentException if a setting is out of range
      */
     public static InverseTimeStage of(InverseTimeFamily family, double pickupAmps, double multiplier) {
+        MultiplierKind kind = family.multiplierKind();
         return new InverseTimeStage(family.aSeconds(), family.bSeconds(), family.exponent(), family.resetSeconds(),
-                pickupAmps, multiplier, HighCurrentBehaviour.FOLLOW_EQUATION, STANDARD_UPPER_MULTIPLE, family.key());
+                pickupAmps, multiplier, kind, defaultRange(family.key(), kind, multiplier),
+                HighCurrentBehaviour.FOLLOW_EQUATION, STANDARD_UPPER_MULTIPLE, family.key());
+    }
+
+    /**
+     * A stage with constants of its own, in the general form.
+     *
+     * @param aSeconds constant A in seconds, above 0
+     * @param bSeconds constant B in seconds, 0 or more
+     * @param exponent exponent p, above 0
+     * @param pickupAmps pickup in amperes, above 0
+     * @param kind whether the multiplier is a TMS or a time dial
+     * @param multiplier the multiplier, above 0
+     * @return the stage, following the equation at all currents, with the kind's default range
+     * @throws IllegalArgumentException if a constant or setting is out of range
+     */
+    public static InverseTimeStage custom(double aSeconds, double bSeconds, double exponent, double pickupAmps,
+            MultiplierKind kind, double multiplier) {
+        return new InverseTimeStage(aSeconds, bSeconds, exponent, Double.NaN, pickupAmps, multiplier, kind,
+                defaultRange("custom", kind, multiplier), HighCurrentBehaviour.FOLLOW_EQUATION, STANDARD_UPPER_MULTIPLE,
+                "custom");
+    }
+
+    private static SettingRange defaultRange(String label, MultiplierKind kind, double multiplier) {
+        if (kind == null) {
+            throw new IllegalArgumentException(label + ": multiplier kind: found null - must be given");
+        }
+        Checks.positive(label + ": time multiplier", multiplier, "");
+        return kind.defaultRange().including(multiplier);
     }
 
     /**
@@ -75,18 +117,30 @@ public record InverseTimeStage(
      */
     public InverseTimeStage withHighCurrent(HighCurrentBehaviour behaviour, double multiple) {
         return new InverseTimeStage(aSeconds, bSeconds, exponent, resetConstantSeconds, pickupAmps, multiplier,
-                behaviour, multiple, label);
+                multiplierKind, multiplierRange, behaviour, multiple, label);
     }
 
     /**
-     * This stage with another time multiplier.
+     * This stage with another setting range for its multiplier.
+     *
+     * @param range the settings the relay offers
+     * @return the new stage
+     */
+    public InverseTimeStage withMultiplierRange(SettingRange range) {
+        return new InverseTimeStage(aSeconds, bSeconds, exponent, resetConstantSeconds, pickupAmps, multiplier,
+                multiplierKind, range, highCurrent, upperMultiple, label);
+    }
+
+    /**
+     * This stage with another time multiplier; the setting range stays as it is, so design aids
+     * can probe values outside it.
      *
      * @param newMultiplier TMS or time dial, above 0
      * @return the new stage
      */
     public InverseTimeStage withMultiplier(double newMultiplier) {
         return new InverseTimeStage(aSeconds, bSeconds, exponent, resetConstantSeconds, pickupAmps, newMultiplier,
-                highCurrent, upperMultiple, label);
+                multiplierKind, multiplierRange, highCurrent, upperMultiple, label);
     }
 
     /**
@@ -97,7 +151,7 @@ public record InverseTimeStage(
      */
     public InverseTimeStage withPickupAmps(double newPickupAmps) {
         return new InverseTimeStage(aSeconds, bSeconds, exponent, resetConstantSeconds, newPickupAmps, multiplier,
-                highCurrent, upperMultiple, label);
+                multiplierKind, multiplierRange, highCurrent, upperMultiple, label);
     }
 
     @Override
@@ -167,6 +221,7 @@ public record InverseTimeStage(
 
     @Override
     public String toString() {
-        return label + " Ip=" + Checks.format(pickupAmps) + " A M=" + Checks.format(multiplier);
+        return label + " Ip=" + Checks.format(pickupAmps) + " A " + multiplierKind.key() + "="
+                + Checks.format(multiplier);
     }
 }

@@ -3,6 +3,7 @@ package coordination.core.curve;
 import coordination.core.internal.Checks;
 import java.util.ArrayList;
 import java.util.List;
+import java.util.Optional;
 
 /**
  * An overcurrent relay and its circuit breaker: several stages acting together (the fastest wins),
@@ -15,6 +16,7 @@ import java.util.List;
 public final class Relay implements ProtectiveDevice {
     private final String id;
     private final List<TimeCurrentCurve> stages;
+    private final Optional<CurrentTransformer> ct;
     private final double ctRatio;
     private final double breakerSeconds;
     private final TimeCurrentCurve operating;
@@ -30,11 +32,28 @@ public final class Relay implements ProtectiveDevice {
      * @throws IllegalArgumentException if no stage is given or a parameter is out of range
      */
     public Relay(String id, List<? extends TimeCurrentCurve> stages, double ctRatio, double breakerSeconds) {
+        this(id, stages, ratioOnly(id, ctRatio), breakerSeconds);
+    }
+
+    /**
+     * Creates a relay behind a current transformer, or with primary settings.
+     *
+     * @param id identifier
+     * @param stages one or more stages, settings in secondary amperes when a CT is given
+     * @param ct the current transformer, or empty when the settings are primary amperes
+     * @param breakerSeconds breaker interrupting time in seconds, 0 or more
+     * @throws IllegalArgumentException if the id is missing, no stage is given or a time is out of range
+     */
+    public Relay(String id, List<? extends TimeCurrentCurve> stages, Optional<CurrentTransformer> ct,
+            double breakerSeconds) {
+        if (id == null || stages == null || ct == null) {
+            throw new IllegalArgumentException("relay: found a null id, stage list or CT - each must be given");
+        }
         this.id = id;
-        Checks.positive("relay '" + id + "': CT ratio", ctRatio, "");
         Checks.nonNegative("relay '" + id + "': breaker interrupting time", breakerSeconds, "s");
         this.stages = List.copyOf(stages);
-        this.ctRatio = ctRatio;
+        this.ct = ct;
+        this.ctRatio = ct.map(CurrentTransformer::ratio).orElse(1.0);
         this.breakerSeconds = breakerSeconds;
         List<TimeCurrentCurve> primary = new ArrayList<>();
         for (TimeCurrentCurve s : stages) {
@@ -42,6 +61,11 @@ public final class Relay implements ProtectiveDevice {
         }
         this.operating = new FastestOfCurve("relay '" + id + "'", primary);
         this.clearing = operating.delayedBy(breakerSeconds);
+    }
+
+    private static Optional<CurrentTransformer> ratioOnly(String id, double ctRatio) {
+        Checks.positive("relay '" + id + "': CT ratio", ctRatio, "");
+        return ctRatio == 1.0 ? Optional.empty() : Optional.of(new CurrentTransformer(ctRatio, 1.0));
     }
 
     /**
@@ -62,7 +86,7 @@ public final class Relay implements ProtectiveDevice {
      * @return the new relay
      */
     public Relay withBreakerSeconds(double seconds) {
-        return new Relay(id, stages, ctRatio, seconds);
+        return new Relay(id, stages, ct, seconds);
     }
 
     /**
@@ -72,7 +96,7 @@ public final class Relay implements ProtectiveDevice {
      * @return the new relay
      */
     public Relay withStages(List<? extends TimeCurrentCurve> newStages) {
-        return new Relay(id, newStages, ctRatio, breakerSeconds);
+        return new Relay(id, newStages, ct, breakerSeconds);
     }
 
     @Override
@@ -90,7 +114,12 @@ public final class Relay implements ProtectiveDevice {
         return stages;
     }
 
-    /** @return CT primary amperes per secondary ampere */
+    /** @return the current transformer, or empty when the settings are primary amperes */
+    public Optional<CurrentTransformer> currentTransformer() {
+        return ct;
+    }
+
+    /** @return CT primary amperes per secondary ampere, 1 without a CT */
     public double ctRatio() {
         return ctRatio;
     }

@@ -1,10 +1,22 @@
 package coordination.core.study;
 
+import coordination.core.internal.Checks;
 import java.util.ArrayList;
 import java.util.Arrays;
+import java.util.LinkedHashMap;
 import java.util.List;
+import java.util.Map;
+import java.util.Optional;
+import java.util.OptionalDouble;
+import java.util.OptionalInt;
+import java.util.function.Function;
 
-/** Typed access to located nodes that records a {@link Problem} for every mistake instead of stopping. */
+/**
+ * Typed access to located nodes that records a {@link Problem} for every mistake instead of
+ * stopping. Every reader returns an {@code Optional}: empty when the value is missing without a
+ * default, or when it is invalid (a problem is then recorded). A caller that needs to know whether
+ * anything went wrong compares {@link #problemCount()} before and after.
+ */
 final class Binder {
     /** Longest text value accepted: titles and ids are short. */
     static final int MAX_TEXT = 500;
@@ -15,6 +27,70 @@ final class Binder {
     Binder(String file, List<Problem> problems) {
         this.file = file;
         this.problems = problems;
+    }
+
+    /**
+     * How a number is read: its key, unit and bounds, and whether it is required or defaulted.
+     *
+     * @param key the key in its mapping (empty for a list item)
+     * @param unit the unit shown in messages, or empty
+     * @param min lower bound
+     * @param minExclusive whether the lower bound itself is refused
+     * @param max upper bound, inclusive
+     * @param mandatory whether a missing key is a problem
+     * @param dflt the value of a missing optional key, or empty
+     */
+    record NumberField(String key, String unit, double min, boolean minExclusive, double max, boolean mandatory,
+            OptionalDouble dflt) {
+
+        static NumberField number(String key, String unit) {
+            return new NumberField(key, unit, Double.NEGATIVE_INFINITY, false, Double.POSITIVE_INFINITY, false,
+                    OptionalDouble.empty());
+        }
+
+        NumberField above(double bound) {
+            return new NumberField(key, unit, bound, true, max, mandatory, dflt);
+        }
+
+        NumberField from(double bound) {
+            return new NumberField(key, unit, bound, false, max, mandatory, dflt);
+        }
+
+        NumberField to(double bound) {
+            return new NumberField(key, unit, min, minExclusive, bound, mandatory, dflt);
+        }
+
+        NumberField required() {
+            return new NumberField(key, unit, min, minExclusive, max, true, dflt);
+        }
+
+        NumberField named(String newKey) {
+            return new NumberField(newKey, unit, min, minExclusive, max, mandatory, dflt);
+        }
+
+        NumberField orElse(double value) {
+            return new NumberField(key, unit, min, minExclusive, max, false, OptionalDouble.of(value));
+        }
+
+        /** The same bounds and unit for a value without a key (a list item). */
+        NumberField item() {
+            return new NumberField("", unit, min, minExclusive, max, true, OptionalDouble.empty());
+        }
+    }
+
+    /**
+     * The words of an enumeration, in declaration order, for a choice.
+     *
+     * @param values the constants
+     * @param word the study-file word of each
+     * @return words to constants
+     */
+    static <E> Map<String, E> words(E[] values, Function<E, String> word) {
+        Map<String, E> m = new LinkedHashMap<>();
+        for (E v : values) {
+            m.put(word.apply(v), v);
+        }
+        return m;
     }
 
     int problemCount() {
@@ -33,30 +109,30 @@ final class Binder {
         return path.isEmpty() ? key : path + "." + key;
     }
 
-    Node.MapNode map(Node n, String path) {
+    Optional<Node.MapNode> map(Node n, String path) {
         if (n instanceof Node.MapNode m) {
-            return m;
+            return Optional.of(m);
         }
         if (n != null) {
             problem(n, path, "expected a mapping of keys, found " + n.kindName());
         }
-        return null;
+        return Optional.empty();
     }
 
-    List<Node> list(Node n, String path) {
+    Optional<List<Node>> list(Node n, String path) {
         if (n instanceof Node.ListNode l) {
-            return l.items();
+            return Optional.of(l.items());
         }
         if (n != null) {
             problem(n, path, "expected a list, found " + n.kindName());
         }
-        return null;
+        return Optional.empty();
     }
 
     /** Reports every key of the map not in {@code allowed}, with a suggestion. */
-    void allowOnly(Node.MapNode m, String path, String... allowed) {
+    void allowOnly(Node.MapNode m, String path, List<String> allowed) {
         for (Node.Entry e : m.entries().values()) {
-            if (!Arrays.asList(allowed).contains(e.name())) {
+            if (!allowed.contains(e.name())) {
                 String hint = suggestion(e.name(), allowed);
                 problemAtKey(e, join(path, e.name()), "unknown key" + (hint == null ? " - allowed here: "
                         + String.join(", ", allowed) : " - did you mean '" + hint + "'?"));
@@ -64,7 +140,11 @@ final class Binder {
         }
     }
 
-    static String suggestion(String given, String... candidates) {
+    void allowOnly(Node.MapNode m, String path, String... allowed) {
+        allowOnly(m, path, Arrays.asList(allowed));
+    }
+
+    static String suggestion(String given, List<String> candidates) {
         String best = null;
         int bestDistance = Integer.MAX_VALUE;
         for (String c : candidates) {
@@ -106,183 +186,203 @@ final class Binder {
         return e == null ? null : e.value();
     }
 
+    /** The value node of a key, or the mapping itself where the key has no value (for locations). */
+    Node at(Node.MapNode m, String key) {
+        Node n = value(m, key);
+        return n == null ? m : n;
+    }
+
     void missing(Node.MapNode m, String path, String key, String why) {
         problem(m, join(path, key), "missing" + (why.isEmpty() ? "" : " - " + why));
     }
 
-    /** A required or optional text value; null if missing or invalid. */
-    String text(Node.MapNode m, String path, String key, boolean required, String why) {
+    /** A required text value. */
+    Optional<String> text(Node.MapNode m, String path, String key, String why) {
+        if (!has(m, key)) {
+            missing(m, path, key, why);
+            return Optional.empty();
+        }
+        return optionalText(m, path, key);
+    }
+
+    /** An optional text value; empty if missing or invalid. */
+    Optional<String> optionalText(Node.MapNode m, String path, String key) {
+        if (!has(m, key)) {
+            return Optional.empty();
+        }
         Node n = value(m, key);
         if (n == null) {
-            if (required && !has(m, key)) {
-                missing(m, path, key, why);
-            } else if (has(m, key)) {
-                problem(m, join(path, key), "expected text, found nothing");
-            }
-            return null;
+            problem(m, join(path, key), "expected text, found nothing");
+            return Optional.empty();
         }
         if (n instanceof Node.Scalar s && s.type() != Node.ScalarType.NULL) {
             if (s.text().isBlank()) {
                 problem(n, join(path, key), "expected text, found an empty value");
-                return null;
+                return Optional.empty();
             }
             if (s.text().length() > MAX_TEXT) {
                 problem(n, join(path, key), "found text of " + s.text().length() + " characters - at most " + MAX_TEXT
                         + " are accepted");
-                return null;
+                return Optional.empty();
             }
-            return s.text();
+            return Optional.of(s.text());
         }
         problem(n, join(path, key), "expected text, found " + n.kindName());
-        return null;
+        return Optional.empty();
     }
 
-    /**
-     * A number; NaN if missing or invalid. {@code min} and {@code max} bound it, with
-     * {@code minExclusive} making the lower bound strict.
-     */
-    double number(Node.MapNode m, String path, String key, boolean required, double dflt, double min,
-            boolean minExclusive, double max, String unit) {
-        Node n = value(m, key);
-        if (n == null && !has(m, key)) {
-            if (required) {
-                missing(m, path, key, "");
-                return Double.NaN;
+    /** A number of a mapping, as its field describes. */
+    OptionalDouble number(Node.MapNode m, String path, NumberField f) {
+        if (!has(m, f.key())) {
+            if (f.mandatory()) {
+                missing(m, path, f.key(), "");
             }
-            return dflt;
+            return f.dflt();
         }
-        return number(n == null ? m : n, join(path, key), min, minExclusive, max, unit);
+        return number(at(m, f.key()), join(path, f.key()), f);
     }
 
-    double number(Node n, String path, double min, boolean minExclusive, double max, String unit) {
+    /** A number at a node (a list item, or a key's value), with the field's bounds and unit. */
+    OptionalDouble number(Node n, String path, NumberField f) {
         if (!(n instanceof Node.Scalar s) || s.type() != Node.ScalarType.NUMBER) {
             problem(n, path, "expected a number, found " + (n == null ? "nothing" : n.kindName()));
-            return Double.NaN;
+            return OptionalDouble.empty();
         }
         double v = s.number();
-        String u = unit.isEmpty() ? "" : " " + unit;
+        String u = f.unit().isEmpty() ? "" : " " + f.unit();
         if (!Double.isFinite(v)) {
             problem(n, path, "expected a finite number, found " + s.text());
-            return Double.NaN;
+            return OptionalDouble.empty();
         }
-        boolean low = minExclusive ? !(v > min) : !(v >= min);
-        if (low || v > max) {
-            String range = (minExclusive ? "above " + fmt(min) : "from " + fmt(min))
-                    + (Double.isInfinite(max) ? "" : (minExclusive ? " and at most " : " to ") + fmt(max)) + u;
+        boolean low = f.minExclusive() ? !(v > f.min()) : !(v >= f.min());
+        if (low || v > f.max()) {
+            String range = (f.minExclusive() ? "above " + fmt(f.min()) : "from " + fmt(f.min()))
+                    + (Double.isInfinite(f.max()) ? "" : (f.minExclusive() ? " and at most " : " to ") + fmt(f.max()))
+                    + u;
             problem(n, path, "found " + s.text() + u + " - must be " + range);
-            return Double.NaN;
+            return OptionalDouble.empty();
         }
-        return v;
+        return OptionalDouble.of(v);
     }
 
-    int integer(Node.MapNode m, String path, String key, int dflt, int min, int max) {
-        Node n = value(m, key);
-        if (n == null && !has(m, key)) {
-            return dflt;
+    /** A whole number of a mapping, as its field describes (the field must have a default or be required). */
+    OptionalInt integer(Node.MapNode m, String path, NumberField f) {
+        boolean given = has(m, f.key());
+        OptionalDouble v = number(m, path, f);
+        if (v.isEmpty()) {
+            return OptionalInt.empty();
         }
-        double v = number(n == null ? m : n, join(path, key), min, false, max, "");
-        if (Double.isNaN(v)) {
-            return Integer.MIN_VALUE;
+        if (given && v.getAsDouble() != Math.rint(v.getAsDouble())) {
+            problem(value(m, f.key()), join(path, f.key()), "expected a whole number, found "
+                    + ((Node.Scalar) value(m, f.key())).text());
+            return OptionalInt.empty();
         }
-        if (v != Math.rint(v)) {
-            problem(n, join(path, key), "expected a whole number, found " + ((Node.Scalar) n).text());
-            return Integer.MIN_VALUE;
-        }
-        return (int) v;
+        return OptionalInt.of((int) v.getAsDouble());
     }
 
-    Boolean bool(Node.MapNode m, String path, String key, boolean dflt) {
-        Node n = value(m, key);
-        if (n == null && !has(m, key)) {
-            return dflt;
+    /** A boolean; empty if invalid. */
+    Optional<Boolean> bool(Node.MapNode m, String path, String key, boolean dflt) {
+        if (!has(m, key)) {
+            return Optional.of(dflt);
         }
+        Node n = value(m, key);
         if (n instanceof Node.Scalar s && s.type() == Node.ScalarType.BOOLEAN) {
-            return Boolean.parseBoolean(s.text().toLowerCase(java.util.Locale.ROOT));
+            return Optional.of(Boolean.parseBoolean(s.text().toLowerCase(java.util.Locale.ROOT)));
         }
-        problem(n == null ? m : n, join(path, key), "expected true or false, found "
-                + (n == null ? "nothing" : n.kindName()));
-        return null;
+        problem(at(m, key), join(path, key), "expected true or false, found " + (n == null ? "nothing" : n.kindName()));
+        return Optional.empty();
     }
 
-    /** One of a set of words; null if missing or invalid. */
-    String choice(Node.MapNode m, String path, String key, boolean required, String dflt, List<String> allowed) {
-        Node n = value(m, key);
-        if (n == null && !has(m, key)) {
-            if (required) {
-                missing(m, path, key, "one of " + String.join(", ", allowed));
-                return null;
-            }
-            return dflt;
+    /** A required word of a set; empty if missing or invalid. */
+    <E> Optional<E> choice(Node.MapNode m, String path, String key, Map<String, E> words) {
+        if (!has(m, key)) {
+            missing(m, path, key, "one of " + String.join(", ", words.keySet()));
+            return Optional.empty();
         }
-        String v = text(m, path, key, true, "");
-        if (v == null) {
-            return null;
+        return word(m, path, key, words);
+    }
+
+    /** An optional word of a set with a default; empty if invalid. */
+    <E> Optional<E> choice(Node.MapNode m, String path, String key, Map<String, E> words, E dflt) {
+        return has(m, key) ? word(m, path, key, words) : Optional.of(dflt);
+    }
+
+    private <E> Optional<E> word(Node.MapNode m, String path, String key, Map<String, E> words) {
+        Optional<String> v = text(m, path, key, "");
+        if (v.isEmpty()) {
+            return Optional.empty();
         }
-        if (!allowed.contains(v)) {
-            String hint = suggestion(v, allowed.toArray(new String[0]));
-            problem(n, join(path, key), "found '" + v + "' - must be one of " + String.join(", ", allowed)
+        E found = words.get(v.get());
+        if (found == null) {
+            List<String> allowed = new ArrayList<>(words.keySet());
+            String hint = suggestion(v.get(), allowed);
+            problem(value(m, key), join(path, key), "found '" + v.get() + "' - must be one of " + String.join(", ", allowed)
                     + (hint == null ? "" : " (did you mean '" + hint + "'?)"));
-            return null;
+            return Optional.empty();
         }
-        return v;
+        return Optional.of(found);
     }
 
-    /** A {min, max} range in kA converted to amperes; null if invalid. */
-    double[] rangeKa(Node.MapNode m, String path, String key, boolean required) {
-        Node n = value(m, key);
-        if (n == null && !has(m, key)) {
+    /** A {min, max} range in kA converted to amperes; empty if missing or invalid. */
+    Optional<double[]> rangeKa(Node.MapNode m, String path, String key, boolean required) {
+        if (!has(m, key)) {
             if (required) {
                 missing(m, path, key, "a range such as {min: 1.5, max: 12}");
             }
-            return null;
+            return Optional.empty();
         }
         String p = join(path, key);
-        Node.MapNode r = map(n == null ? m : n, p);
-        if (r == null) {
+        Node n = value(m, key);
+        Optional<Node.MapNode> r = map(at(m, key), p);
+        if (r.isEmpty()) {
             if (n == null) {
                 problem(m, p, "expected a range such as {min: 1.5, max: 12}, found nothing");
             }
-            return null;
+            return Optional.empty();
         }
-        allowOnly(r, p, "min", "max");
-        double lo = number(r, p, "min", true, Double.NaN, 0, true, 1e4, "kA");
-        double hi = number(r, p, "max", true, Double.NaN, 0, true, 1e4, "kA");
-        if (Double.isNaN(lo) || Double.isNaN(hi)) {
-            return null;
+        allowOnly(r.get(), p, "min", "max");
+        OptionalDouble lo = number(r.get(), p, RANGE_MIN);
+        OptionalDouble hi = number(r.get(), p, RANGE_MAX);
+        if (lo.isEmpty() || hi.isEmpty()) {
+            return Optional.empty();
         }
-        if (hi < lo) {
-            problem(value(r, "max"), join(p, "max"), "found " + fmt(hi) + " kA - must be at or above min, "
-                    + fmt(lo) + " kA");
-            return null;
+        if (hi.getAsDouble() < lo.getAsDouble()) {
+            problem(value(r.get(), "max"), join(p, "max"), "found " + fmt(hi.getAsDouble()) + " kA - must be at or above"
+                    + " min, " + fmt(lo.getAsDouble()) + " kA");
+            return Optional.empty();
         }
-        return new double[] {lo * 1000, hi * 1000};
+        return Optional.of(new double[] {lo.getAsDouble() * 1000, hi.getAsDouble() * 1000});
     }
 
-    /** A list of [current A, time s] pairs; null if invalid. */
-    double[][] points(Node.MapNode m, String path, String key, boolean required, int maxPoints) {
+    private static final NumberField RANGE_MIN = NumberField.number("min", "kA").above(0).to(1e4).required();
+    private static final NumberField RANGE_MAX = NumberField.number("max", "kA").above(0).to(1e4).required();
+    private static final NumberField POINT_AMPS = NumberField.number("", "A").above(0).required();
+    private static final NumberField POINT_SECONDS = NumberField.number("", "s").above(0).required();
+
+    /** A list of [current A, time s] pairs as {amps, seconds}; empty if missing or invalid. */
+    Optional<double[][]> points(Node.MapNode m, String path, String key, int maxPoints) {
         Node n = value(m, key);
         if (n == null) {
-            if (required) {
-                missing(m, path, key, "a list of [current A, time s] points");
-            }
-            return null;
+            missing(m, path, key, "a list of [current A, time s] points");
+            return Optional.empty();
         }
         String p = join(path, key);
-        List<Node> items = list(n, p);
-        if (items == null) {
-            return null;
+        Optional<List<Node>> listed = list(n, p);
+        if (listed.isEmpty()) {
+            return Optional.empty();
         }
+        List<Node> items = listed.get();
         if (items.size() < 2) {
             problem(n, p, "found " + items.size() + " point(s) - a curve needs at least 2");
-            return null;
+            return Optional.empty();
         }
         if (items.size() > maxPoints) {
             problem(n, p, "found " + items.size() + " points - at most " + maxPoints + " are accepted");
-            return null;
+            return Optional.empty();
         }
         double[] amps = new double[items.size()];
         double[] secs = new double[items.size()];
-        boolean ok = true;
+        int before = problemCount();
         for (int i = 0; i < items.size(); i++) {
             String ip = p + "[" + i + "]";
             List<Node> pair = items.get(i) instanceof Node.ListNode l ? l.items() : null;
@@ -290,24 +390,21 @@ final class Binder {
                 problem(items.get(i), ip, "expected a point [current A, time s], found "
                         + (items.get(i) == null ? "nothing" : pair == null ? items.get(i).kindName()
                         : "a list of " + pair.size()));
-                ok = false;
                 continue;
             }
-            amps[i] = number(pair.get(0), ip + "[0]", 0, true, Double.POSITIVE_INFINITY, "A");
-            secs[i] = number(pair.get(1), ip + "[1]", 0, true, Double.POSITIVE_INFINITY, "s");
-            ok &= !Double.isNaN(amps[i]) && !Double.isNaN(secs[i]);
+            amps[i] = number(pair.get(0), ip + "[0]", POINT_AMPS).orElse(0);
+            secs[i] = number(pair.get(1), ip + "[1]", POINT_SECONDS).orElse(0);
         }
-        return ok ? new double[][] {amps, secs} : null;
+        return problemCount() > before ? Optional.empty() : Optional.of(new double[][] {amps, secs});
     }
 
     /** A list that may be missing or empty (a key with no value counts as empty). */
     List<Node> optionalList(Node.MapNode m, String path, String key) {
         Node n = value(m, key);
-        List<Node> l = n == null ? null : list(n, join(path, key));
-        return l == null ? new ArrayList<>() : l;
+        return n == null ? new ArrayList<>() : list(n, join(path, key)).orElseGet(ArrayList::new);
     }
 
     static String fmt(double v) {
-        return coordination.core.internal.Checks.format(v);
+        return Checks.format(v);
     }
 }

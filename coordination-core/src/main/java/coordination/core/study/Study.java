@@ -2,10 +2,12 @@ package coordination.core.study;
 
 import coordination.core.cable.CableThermalLimit;
 import coordination.core.curve.ProtectiveDevice;
+import coordination.core.internal.Checks;
 import coordination.core.margin.DcOffset;
 import coordination.core.margin.GradingRequirement;
 import coordination.core.margin.MarginRequirement;
 import java.util.List;
+import java.util.Optional;
 
 /**
  * A coordination study read from a study file: its cables, devices and the checks to run, with
@@ -35,16 +37,23 @@ public record Study(String name, String title, double voltageKv, double frequenc
     /** Sheet page sizes. */
     public enum PageSize {
         /** ISO A4 landscape, 297 mm x 210 mm. */
-        A4(297.0, 210.0),
+        A4("a4", 297.0, 210.0),
         /** US Letter landscape, 11 in x 8.5 in. */
-        LETTER(279.4, 215.9);
+        LETTER("letter", 279.4, 215.9);
 
+        private final String key;
         private final double widthMm;
         private final double heightMm;
 
-        PageSize(double widthMm, double heightMm) {
+        PageSize(String key, double widthMm, double heightMm) {
+            this.key = key;
             this.widthMm = widthMm;
             this.heightMm = heightMm;
+        }
+
+        /** @return the study-file word, {@code a4} or {@code letter} */
+        public String key() {
+            return key;
         }
 
         /** @return landscape width in mm */
@@ -59,14 +68,43 @@ public record Study(String name, String title, double voltageKv, double frequenc
     }
 
     /**
+     * A range of prospective fault currents.
+     *
+     * @param fromAmps lowest current in amperes, above 0
+     * @param toAmps highest current in amperes, at or above {@code fromAmps}
+     */
+    public record CurrentRange(double fromAmps, double toAmps) {
+        /**
+         * Validates the range.
+         *
+         * @throws IllegalArgumentException if an end is not positive or the range is inverted
+         */
+        public CurrentRange {
+            Checks.currentRange("current range", fromAmps, toAmps);
+        }
+    }
+
+    /** Where a cable's conductor temperature came from. */
+    public enum TemperatureSource {
+        /** Given in the study. */
+        STATED,
+        /** Computed from the load the cable carries. */
+        FROM_LOAD,
+        /** The insulation's default, not given in the study. */
+        INSULATION_DEFAULT
+    }
+
+    /**
      * A cable of the study.
      *
      * @param limit its thermal limit
      * @param sizeText its size as written (e.g. {@code 70 mm²}, {@code 4/0 AWG})
-     * @param faultMinAmps lowest prospective fault current in amperes, or NaN if not given
-     * @param faultMaxAmps highest prospective fault current in amperes, or NaN if not given
+     * @param fault prospective fault currents, if the study gives them
+     * @param initialSource where the initial temperature came from
+     * @param finalSource where the final temperature came from
      */
-    public record StudyCable(CableThermalLimit limit, String sizeText, double faultMinAmps, double faultMaxAmps) {
+    public record StudyCable(CableThermalLimit limit, String sizeText, Optional<CurrentRange> fault,
+            TemperatureSource initialSource, TemperatureSource finalSource) {
         /** @return the cable's id */
         public String id() {
             return limit.id();
@@ -78,16 +116,11 @@ public record Study(String name, String title, double voltageKv, double frequenc
      *
      * @param device the device as set, currents at its own voltage
      * @param voltageKv its voltage level in kV
+     * @param referralFactor the factor its currents are multiplied by at the study's reference voltage
      * @param referred the device with currents at the study's reference voltage
-     * @param settings one line per setting, for the sheet's settings table
      */
-    public record StudyDevice(ProtectiveDevice device, double voltageKv, ProtectiveDevice referred,
-            List<String> settings) {
-        /** Copies the list in. */
-        public StudyDevice {
-            settings = List.copyOf(settings);
-        }
-
+    public record StudyDevice(ProtectiveDevice device, double voltageKv, double referralFactor,
+            ProtectiveDevice referred) {
         /** @return the device's id */
         public String id() {
             return device.id();
@@ -104,12 +137,11 @@ public record Study(String name, String title, double voltageKv, double frequenc
      * @param cable cable id
      * @param device device id
      * @param requirement the margin asked for
-     * @param fromAmps lowest current of the range in amperes
-     * @param toAmps highest current in amperes
-     * @param dcOffset DC-offset heating, or null
+     * @param range the fault currents checked
+     * @param dcOffset DC-offset heating, if asked for
      */
-    public record CableCheckSpec(String cable, String device, MarginRequirement requirement, double fromAmps,
-            double toAmps, DcOffset dcOffset) implements StudyCheck {
+    public record CableCheckSpec(String cable, String device, MarginRequirement requirement, CurrentRange range,
+            Optional<DcOffset> dcOffset) implements StudyCheck {
     }
 
     /**
@@ -118,30 +150,34 @@ public record Study(String name, String title, double voltageKv, double frequenc
      * @param upstream upstream device id
      * @param downstream downstream device id
      * @param requirement what is asked
-     * @param fromAmps lowest current in amperes
-     * @param toAmps highest current in amperes
+     * @param range the currents both devices see
      */
     public record GradingCheckSpec(String upstream, String downstream, GradingRequirement requirement,
-            double fromAmps, double toAmps) implements StudyCheck {
+            CurrentRange range) implements StudyCheck {
     }
 
     /**
      * Finds a cable.
      *
      * @param id its id
-     * @return the cable, or null
+     * @return the cable
+     * @throws IllegalArgumentException if the study has no cable of that id
      */
     public StudyCable cable(String id) {
-        return cables.stream().filter(c -> c.id().equals(id)).findFirst().orElse(null);
+        return cables.stream().filter(c -> c.id().equals(id)).findFirst()
+                .orElseThrow(() -> new IllegalArgumentException("study '" + name + "': no cable has the id '" + id + "'"));
     }
 
     /**
      * Finds a device.
      *
      * @param id its id
-     * @return the device, or null
+     * @return the device
+     * @throws IllegalArgumentException if the study has no device of that id
      */
     public StudyDevice device(String id) {
-        return devices.stream().filter(d -> d.id().equals(id)).findFirst().orElse(null);
+        return devices.stream().filter(d -> d.id().equals(id)).findFirst()
+                .orElseThrow(() -> new IllegalArgumentException("study '" + name + "': no device has the id '" + id
+                        + "'"));
     }
 }

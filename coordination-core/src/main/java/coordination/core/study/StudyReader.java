@@ -1,20 +1,26 @@
 package coordination.core.study;
 
+import static coordination.core.study.Binder.NumberField.number;
+
 import coordination.core.CoordinationException;
 import coordination.core.cable.CableThermalLimit;
 import coordination.core.cable.ConductorMaterial;
 import coordination.core.cable.ConductorSizes;
 import coordination.core.cable.Insulation;
 import coordination.core.cable.ThermalMethod;
+import coordination.core.curve.CurrentTransformer;
 import coordination.core.curve.DefiniteTimeStage;
+import coordination.core.curve.DeviceKind;
 import coordination.core.curve.Fuse;
 import coordination.core.curve.HighCurrentBehaviour;
 import coordination.core.curve.InverseTimeFamily;
 import coordination.core.curve.InverseTimeStage;
 import coordination.core.curve.McbType;
 import coordination.core.curve.MiniatureBreaker;
+import coordination.core.curve.MultiplierKind;
 import coordination.core.curve.ProtectiveDevice;
 import coordination.core.curve.Relay;
+import coordination.core.curve.SettingRange;
 import coordination.core.curve.TabulatedCurve;
 import coordination.core.curve.TimeCurrentCurve;
 import coordination.core.curve.TripUnitBreaker;
@@ -22,6 +28,7 @@ import coordination.core.internal.Checks;
 import coordination.core.margin.DcOffset;
 import coordination.core.margin.GradingRequirement;
 import coordination.core.margin.MarginRequirement;
+import coordination.core.study.Binder.NumberField;
 import java.io.IOException;
 import java.nio.charset.CharacterCodingException;
 import java.nio.charset.CodingErrorAction;
@@ -30,10 +37,15 @@ import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.HashMap;
+import java.util.HashSet;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
+import java.util.Optional;
 import java.util.OptionalDouble;
+import java.util.OptionalInt;
+import java.util.Set;
+import java.util.function.Function;
 
 /**
  * Reads study files (format 1, {@code spec/study-format.md}). Every problem of a file is collected
@@ -46,31 +58,92 @@ public final class StudyReader {
     public static final int MAX_POINTS = 500;
     /** Most cables, devices or checks accepted in one study. */
     public static final int MAX_ITEMS = 200;
+    /** Most stages accepted in one relay. */
+    public static final int MAX_STAGES = 10;
 
-    private static final List<String> CURVES = curveKeys();
-    private static final List<String> TYPES = List.of("relay", "fuse", "breaker", "mcb");
+    private static final String DEFINITE_TIME = "definite-time";
+    private static final String INSTANTANEOUS = "instantaneous";
+    private static final String CUSTOM = "custom";
+
+    private static final Map<String, DeviceKind> TYPES = Binder.words(DeviceKind.values(), DeviceKind::key);
+    private static final Map<String, String> CURVES = curveWords();
+    private static final Map<String, ConductorMaterial> CONDUCTORS = conductorWords();
+    private static final Map<String, Insulation> INSULATIONS = Binder.words(Insulation.values(), Insulation::key);
+    private static final Map<String, ThermalMethod> METHODS = Binder.words(ThermalMethod.values(), ThermalMethod::key);
+    private static final Map<String, Study.PageSize> PAGES = Binder.words(Study.PageSize.values(), Study.PageSize::key);
+    private static final Map<String, McbType> MCB_TYPES = Binder.words(McbType.values(), McbType::name);
+    private static final Map<String, HighCurrentBehaviour> HIGH_CURRENT = Binder.words(HighCurrentBehaviour.values(),
+            HighCurrentBehaviour::key);
+
+    private static final NumberField VOLTAGE = number("voltage_kv", "kV").above(0).to(1000);
+    private static final NumberField FREQUENCY = number("frequency_hz", "Hz").from(1).to(1000).orElse(50);
+    private static final NumberField SIZE = number("size_mm2", "mm2").above(0).to(10000).required();
+    private static final NumberField PARALLEL = number("parallel", "").from(1).to(100).orElse(1);
+    private static final NumberField INITIAL = number("initial_c", "°C").from(-50).to(400);
+    private static final NumberField FINAL = number("final_c", "°C").from(-50).to(1000);
+    private static final NumberField LOAD_CURRENT = number("current_a", "A").from(0).to(1e6).required();
+    private static final NumberField LOAD_RATED = number("rated_a", "A").above(0).to(1e6).required();
+    private static final NumberField LOAD_AMBIENT = number("ambient_c", "°C").from(-50).to(100).orElse(30);
+    private static final NumberField BREAKER_TIME = number("breaker_s", "s").from(0).to(10).orElse(0);
+    private static final NumberField CT_PRIMARY = number("primary_a", "A").above(0).to(1e6).required();
+    private static final NumberField CT_SECONDARY = number("secondary_a", "A").above(0).to(100).required();
+    private static final NumberField PICKUP = number("pickup_a", "A").above(0).to(1e6).required();
+    private static final NumberField DT_DELAY = number("delay_s", "s").from(0).to(1000).required();
+    private static final NumberField INST_DELAY = number("delay_s", "s").from(0).to(1).orElse(0);
+    private static final NumberField MULTIPLIER_LIMITS = number("", "").above(0).to(100);
+    private static final NumberField UPPER_MULTIPLE = number("upper_multiple", "").above(1).to(1000)
+            .orElse(InverseTimeStage.STANDARD_UPPER_MULTIPLE);
+    private static final NumberField CONSTANT_A = number("a_s", "s").above(0).to(1e4).required();
+    private static final NumberField CONSTANT_B = number("b_s", "s").from(0).to(1e3).orElse(0);
+    private static final NumberField EXPONENT = number("p", "").above(0).to(10).required();
+    private static final NumberField RESET = number("reset_s", "s").above(0).to(1e4);
+    private static final NumberField FUSE_RATING = number("rating_a", "A").above(0).to(1e5).required();
+    private static final NumberField FUSE_I2T = number("clearing_i2t_a2s", "A2s").above(0).to(1e12);
+    private static final NumberField IR = number("ir_a", "A").above(0).to(1e5).required();
+    private static final NumberField TR = number("tr_s", "s").above(0).to(1000).required();
+    private static final NumberField ISD = number("isd_a", "A").above(0).to(1e6).orElse(Double.POSITIVE_INFINITY);
+    private static final NumberField TSD = number("tsd_s", "s").from(0).to(10).orElse(0);
+    private static final NumberField II = number("ii_a", "A").above(0).to(1e6).orElse(Double.POSITIVE_INFINITY);
+    private static final NumberField PICKUP_TOLERANCE = number("pickup_tolerance", "").from(0).to(0.5).orElse(0.10);
+    private static final NumberField TIME_TOLERANCE = number("time_tolerance", "").from(0).to(0.5).orElse(0.20);
+    private static final NumberField PAIR_ITEM = number("", "").from(0).to(10);
+    private static final NumberField MCB_RATING = number("rating_a", "A").above(0).to(125).required();
+    private static final NumberField MCB_FASTEST = number("fastest_s", "s").from(0).to(0.1)
+            .orElse(MiniatureBreaker.DEFAULT_FASTEST_SECONDS);
+    private static final NumberField MCB_I2T = number("let_through_i2t_a2s", "A2s").above(0).to(1e9);
+    private static final NumberField MARGIN_RATIO = number("margin_ratio", "").from(1).to(1e6).required();
+    private static final NumberField MARGIN_SECONDS = number("margin_s", "s").from(0).to(1e4).orElse(0);
+    private static final NumberField KAPPA = number("kappa", "").above(1).to(2).required();
+    private static final NumberField RATING_RATIO = number("rating_ratio", "").from(1).to(1000).required();
+    private static final NumberField INTERVAL = number("interval_s", "s").from(0).to(100).required();
 
     private final String file;
     private final List<Problem> problems = new ArrayList<>();
     private final Binder b;
-    private final java.util.Set<String> declared = new java.util.HashSet<>();
-    private double studyKv = Double.NaN;
-    private double frequency = 50;
+    private final Set<String> declared = new HashSet<>();
+    private OptionalDouble studyKv = OptionalDouble.empty();
+    private OptionalDouble frequency = OptionalDouble.empty();
 
     private StudyReader(String file) {
         this.file = file;
         this.b = new Binder(file, problems);
     }
 
-    private static List<String> curveKeys() {
-        List<String> k = new ArrayList<>();
+    private static Map<String, String> curveWords() {
+        Map<String, String> k = new LinkedHashMap<>();
         for (InverseTimeFamily f : InverseTimeFamily.values()) {
-            k.add(f.key());
+            k.put(f.key(), f.key());
         }
-        k.add("custom");
-        k.add("definite-time");
-        k.add("instantaneous");
-        return List.copyOf(k);
+        for (String other : new String[] {CUSTOM, DEFINITE_TIME, INSTANTANEOUS}) {
+            k.put(other, other);
+        }
+        return k;
+    }
+
+    private static Map<String, ConductorMaterial> conductorWords() {
+        Map<String, ConductorMaterial> m = Binder.words(ConductorMaterial.values(), ConductorMaterial::key);
+        m.put("aluminum", ConductorMaterial.ALUMINIUM);
+        return m;
     }
 
     /**
@@ -131,13 +204,13 @@ public final class StudyReader {
         }
         StudyReader r = new StudyReader(file);
         Node root = new YamlTreeReader(file, r.problems).read(text);
-        Study study = null;
+        Optional<Study> study = Optional.empty();
         // problems of the tree itself (syntax, duplicates, anchors, aliases) leave values missing, and
         // binding would only echo them
         if (root != null && r.problems.isEmpty()) {
             study = r.study(root, name);
         }
-        if (!r.problems.isEmpty() || study == null) {
+        if (!r.problems.isEmpty() || study.isEmpty()) {
             List<Problem> sorted = new ArrayList<>(r.problems);
             sorted.sort((x, y) -> x.line() != y.line() ? Integer.compare(x.line(), y.line())
                     : Integer.compare(x.column(), y.column()));
@@ -146,7 +219,7 @@ public final class StudyReader {
             }
             throw new StudyFileException(dedupe(sorted));
         }
-        return study;
+        return study.get();
     }
 
     private static List<Problem> dedupe(List<Problem> problems) {
@@ -159,11 +232,12 @@ public final class StudyReader {
         return out;
     }
 
-    private Study study(Node rootNode, String name) {
-        Node.MapNode root = b.map(rootNode, "");
-        if (root == null) {
-            return null;
+    private Optional<Study> study(Node rootNode, String name) {
+        Optional<Node.MapNode> mapped = b.map(rootNode, "");
+        if (mapped.isEmpty()) {
+            return Optional.empty();
         }
+        Node.MapNode root = mapped.get();
         b.allowOnly(root, "", "format", "title", "voltage_kv", "frequency_hz", "revision", "date", "page", "cables",
                 "devices", "checks");
         if (!b.has(root, "format")) {
@@ -173,74 +247,62 @@ public final class StudyReader {
             if (!(f instanceof Node.Scalar s && s.type() == Node.ScalarType.NUMBER && s.number() == 1)) {
                 b.problem(f == null ? root : f, "format", "found " + (f == null ? "nothing" : f.kindName())
                         + " - this reader knows format 1 only");
-                return null;
+                return Optional.empty();
             }
         }
-        String title = b.text(root, "", "title", true, "a title for the study");
-        studyKv = b.number(root, "", "voltage_kv", true, Double.NaN, 0, true, 1000, "kV");
-        frequency = b.number(root, "", "frequency_hz", false, 50, 1, false, 1000, "Hz");
-        String revision = b.text(root, "", "revision", false, "");
-        String date = b.has(root, "date") ? scalarText(root, "date") : null;
-        String page = b.choice(root, "", "page", false, "a4", List.of("a4", "letter"));
+        Optional<String> title = b.text(root, "", "title", "a title for the study");
+        studyKv = b.number(root, "", VOLTAGE.required());
+        frequency = b.number(root, "", FREQUENCY);
+        Optional<String> revision = b.optionalText(root, "", "revision");
+        Optional<String> date = b.has(root, "date") ? scalarText(root, "date") : Optional.empty();
+        Optional<Study.PageSize> page = b.choice(root, "", "page", PAGES, Study.PageSize.A4);
 
-        Map<String, Study.StudyCable> cables = new LinkedHashMap<>();
-        Map<String, Node> cableIdNodes = new HashMap<>();
-        List<Node> cableNodes = limited(b.optionalList(root, "", "cables"), root, "cables");
-        for (int i = 0; i < cableNodes.size(); i++) {
-            String path = "cables[" + i + "]";
-            declare("cable", cableNodes.get(i));
-            Study.StudyCable c = cable(cableNodes.get(i), path);
-            if (c != null) {
-                if (cables.containsKey(c.id())) {
-                    b.problem(b.value((Node.MapNode) cableNodes.get(i), "id"), path + ".id", "duplicate id '" + c.id()
-                            + "' - already used at line " + cableIdNodes.get(c.id()).line());
-                } else {
-                    cables.put(c.id(), c);
-                    cableIdNodes.put(c.id(), b.value((Node.MapNode) cableNodes.get(i), "id"));
-                }
-            }
-        }
-        Map<String, Study.StudyDevice> devices = new LinkedHashMap<>();
-        Map<String, Node> deviceIdNodes = new HashMap<>();
-        List<Node> deviceNodes = limited(b.optionalList(root, "", "devices"), root, "devices");
-        for (int i = 0; i < deviceNodes.size(); i++) {
-            String path = "devices[" + i + "]";
-            declare("device", deviceNodes.get(i));
-            Study.StudyDevice d = device(deviceNodes.get(i), path);
-            if (d != null) {
-                if (devices.containsKey(d.id())) {
-                    b.problem(b.value((Node.MapNode) deviceNodes.get(i), "id"), path + ".id", "duplicate id '" + d.id()
-                            + "' - already used at line " + deviceIdNodes.get(d.id()).line());
-                } else {
-                    devices.put(d.id(), d);
-                    deviceIdNodes.put(d.id(), b.value((Node.MapNode) deviceNodes.get(i), "id"));
-                }
-            }
-        }
+        Map<String, Study.StudyCable> cables = items(root, "cables", "cable", this::cable, Study.StudyCable::id);
+        Map<String, Study.StudyDevice> devices = items(root, "devices", "device", this::device, Study.StudyDevice::id);
         List<Study.StudyCheck> checks = new ArrayList<>();
         List<Node> checkNodes = limited(b.optionalList(root, "", "checks"), root, "checks");
         for (int i = 0; i < checkNodes.size(); i++) {
             try {
-                Study.StudyCheck c = check(checkNodes.get(i), "checks[" + i + "]", cables, devices);
-                if (c != null) {
-                    checks.add(c);
-                }
+                check(checkNodes.get(i), "checks[" + i + "]", cables, devices).ifPresent(checks::add);
             } catch (IllegalArgumentException e) {
                 b.problem(checkNodes.get(i), "checks[" + i + "]", e.getMessage());
             }
         }
-        if (!problems.isEmpty() || title == null) {
-            return null;
+        if (!problems.isEmpty() || title.isEmpty()) {
+            return Optional.empty();
         }
-        return new Study(name, title, studyKv, frequency, revision == null ? "" : revision, date == null ? "" : date,
-                "letter".equals(page) ? Study.PageSize.LETTER : Study.PageSize.A4, List.copyOf(cables.values()),
-                List.copyOf(devices.values()), checks);
+        return Optional.of(new Study(name, title.get(), studyKv.getAsDouble(), frequency.getAsDouble(), revision.orElse(""),
+                date.orElse(""), page.orElseThrow(), List.copyOf(cables.values()), List.copyOf(devices.values()),
+                checks));
     }
 
-    private void declare(String what, Node n) {
-        if (n instanceof Node.MapNode m && b.value(m, "id") instanceof Node.Scalar s) {
-            declared.add(what + ":" + s.text());
+    /** Reads the items of a list of identified things: each is declared, read and registered once by id. */
+    private <T> Map<String, T> items(Node.MapNode root, String key, String what,
+            java.util.function.BiFunction<Node, String, Optional<T>> reader, Function<T, String> id) {
+        Map<String, T> found = new LinkedHashMap<>();
+        Map<String, Node> idNodes = new HashMap<>();
+        List<Node> nodes = limited(b.optionalList(root, "", key), root, key);
+        for (int i = 0; i < nodes.size(); i++) {
+            String path = key + "[" + i + "]";
+            Node n = nodes.get(i);
+            if (n instanceof Node.MapNode m && b.value(m, "id") instanceof Node.Scalar s) {
+                declared.add(what + ":" + s.text());
+            }
+            Optional<T> item = reader.apply(n, path);
+            if (item.isEmpty()) {
+                continue;
+            }
+            String itemId = id.apply(item.get());
+            Node idNode = b.value((Node.MapNode) n, "id");
+            if (found.containsKey(itemId)) {
+                b.problem(idNode, path + ".id", "duplicate id '" + itemId + "' - already used at line "
+                        + idNodes.get(itemId).line());
+            } else {
+                found.put(itemId, item.get());
+                idNodes.put(itemId, idNode);
+            }
         }
+        return found;
     }
 
     private List<Node> limited(List<Node> items, Node.MapNode root, String key) {
@@ -252,45 +314,42 @@ public final class StudyReader {
         return items;
     }
 
-    private String scalarText(Node.MapNode m, String key) {
+    private Optional<String> scalarText(Node.MapNode m, String key) {
         Node n = b.value(m, key);
         if (n instanceof Node.Scalar s && s.type() != Node.ScalarType.NULL) {
-            return s.text();
+            return Optional.of(s.text());
         }
-        b.problem(n == null ? m : n, key, "expected a date or text, found " + (n == null ? "nothing" : n.kindName()));
-        return null;
+        b.problem(b.at(m, key), key, "expected a date or text, found " + (n == null ? "nothing" : n.kindName()));
+        return Optional.empty();
     }
 
     // ---------------------------------------------------------------------------------------- cables
 
-    private Study.StudyCable cable(Node n, String path) {
-        Node.MapNode m = b.map(n, path);
-        if (m == null) {
-            return null;
+    private Optional<Study.StudyCable> cable(Node n, String path) {
+        Optional<Node.MapNode> mapped = b.map(n, path);
+        if (mapped.isEmpty()) {
+            return Optional.empty();
         }
+        Node.MapNode m = mapped.get();
         int before = b.problemCount();
         b.allowOnly(m, path, "id", "conductor", "insulation", "size_mm2", "size", "parallel", "initial_c", "final_c",
                 "load", "method", "fault_ka");
-        String id = b.text(m, path, "id", true, "every cable needs an id");
-        String conductor = b.choice(m, path, "conductor", true, null, List.of("copper", "aluminium", "aluminum"));
-        List<String> insulations = new ArrayList<>();
-        for (Insulation i : Insulation.values()) {
-            insulations.add(i.key());
-        }
-        String insulation = b.choice(m, path, "insulation", true, null, insulations);
-        double size = Double.NaN;
+        Optional<String> id = b.text(m, path, "id", "every cable needs an id");
+        Optional<ConductorMaterial> conductor = b.choice(m, path, "conductor", CONDUCTORS);
+        Optional<Insulation> insulation = b.choice(m, path, "insulation", INSULATIONS);
+        OptionalDouble size = OptionalDouble.empty();
         String sizeText = null;
         if (b.has(m, "size_mm2") && b.has(m, "size")) {
             b.problem(b.value(m, "size"), path + ".size", "give either size_mm2 or size, not both");
         } else if (b.has(m, "size_mm2")) {
-            size = b.number(m, path, "size_mm2", true, Double.NaN, 0, true, 10000, "mm2");
-            sizeText = Checks.format(size) + " mm²";
+            size = b.number(m, path, SIZE);
+            sizeText = size.isPresent() ? Checks.format(size.getAsDouble()) + " mm²" : null;
         } else if (b.has(m, "size")) {
-            String s = b.text(m, path, "size", true, "");
-            if (s != null) {
+            Optional<String> s = b.text(m, path, "size", "");
+            if (s.isPresent()) {
                 try {
-                    size = ConductorSizes.parseMm2(s);
-                    sizeText = s.trim();
+                    size = OptionalDouble.of(ConductorSizes.parseMm2(s.get()));
+                    sizeText = s.get().trim();
                 } catch (CoordinationException | IllegalArgumentException e) {
                     b.problem(b.value(m, "size"), path + ".size", e.getMessage());
                 }
@@ -298,485 +357,494 @@ public final class StudyReader {
         } else {
             b.missing(m, path, "size_mm2", "give size_mm2 (mm²) or size (\"4/0 AWG\", \"250 kcmil\")");
         }
-        int parallel = b.integer(m, path, "parallel", 1, 1, 100);
-        String method = b.choice(m, path, "method", false, "adiabatic", List.of("adiabatic", "non-adiabatic", "icea"));
-        double[] fault = b.rangeKa(m, path, "fault_ka", false);
-        if (b.problemCount() > before || id == null || conductor == null || insulation == null || Double.isNaN(size)) {
+        OptionalInt parallel = b.integer(m, path, PARALLEL);
+        Optional<ThermalMethod> method = b.choice(m, path, "method", METHODS, ThermalMethod.ADIABATIC);
+        Optional<double[]> fault = b.rangeKa(m, path, "fault_ka", false);
+        if (b.problemCount() > before || id.isEmpty() || conductor.isEmpty() || insulation.isEmpty()
+                || size.isEmpty()) {
             // the temperatures depend on the insulation and size; still check their own form
-            b.number(m, path, "initial_c", false, 0, -50, false, 400, "°C");
-            b.number(m, path, "final_c", false, 0, -50, false, 1000, "°C");
-            return null;
+            b.number(m, path, INITIAL);
+            b.number(m, path, FINAL);
+            return Optional.empty();
         }
-        Insulation ins = Insulation.byKey(insulation);
-        double initial;
+        Insulation ins = insulation.get();
+        double mm2 = size.getAsDouble();
+        Study.TemperatureSource initialSource;
+        OptionalDouble initial;
         if (b.has(m, "load") && b.has(m, "initial_c")) {
             b.problem(b.value(m, "load"), path + ".load", "give either initial_c or load, not both");
-            return null;
+            return Optional.empty();
         } else if (b.has(m, "load")) {
             initial = loadTemperature(m, path, ins);
+            initialSource = Study.TemperatureSource.FROM_LOAD;
         } else {
-            initial = b.number(m, path, "initial_c", false, ins.maxOperatingCelsius(), -50, false, 400, "°C");
+            initial = b.number(m, path, INITIAL.orElse(ins.maxOperatingCelsius()));
+            initialSource = b.has(m, "initial_c") ? Study.TemperatureSource.STATED
+                    : Study.TemperatureSource.INSULATION_DEFAULT;
         }
-        double fin = b.number(m, path, "final_c", false, ins.shortCircuitCelsius(size), -50, false, 1000, "°C");
-        if (Double.isNaN(initial) || Double.isNaN(fin) || parallel == Integer.MIN_VALUE) {
-            return null;
+        OptionalDouble fin = b.number(m, path, FINAL.orElse(ins.shortCircuitCelsius(mm2)));
+        Study.TemperatureSource finalSource = b.has(m, "final_c") ? Study.TemperatureSource.STATED
+                : Study.TemperatureSource.INSULATION_DEFAULT;
+        if (initial.isEmpty() || fin.isEmpty() || parallel.isEmpty()) {
+            return Optional.empty();
         }
-        if (!(fin > initial)) {
-            Node at = b.has(m, "initial_c") ? b.value(m, "initial_c") : b.has(m, "final_c") ? b.value(m, "final_c") : m;
-            b.problem(at, path + (b.has(m, "initial_c") ? ".initial_c" : ".final_c"), "initial temperature "
-                    + Checks.format(initial) + " °C is not below the final temperature " + Checks.format(fin)
-                    + " °C - the initial temperature must be below the final one");
-            return null;
+        Optional<String> order = CableThermalLimit.temperatureProblem(initial.getAsDouble(), fin.getAsDouble());
+        if (order.isPresent()) {
+            String at = b.has(m, "initial_c") ? "initial_c" : "final_c";
+            b.problem(b.has(m, at) ? b.value(m, at) : m, path + "." + at, order.get());
+            return Optional.empty();
         }
         try {
-            CableThermalLimit limit = new CableThermalLimit(id, ConductorMaterial.byKey(conductor), ins, size, parallel,
-                    initial, fin, ThermalMethod.byKey(method));
-            return new Study.StudyCable(limit, sizeText, fault == null ? Double.NaN : fault[0],
-                    fault == null ? Double.NaN : fault[1]);
+            CableThermalLimit limit = new CableThermalLimit(id.get(), conductor.get(), ins, mm2, parallel.getAsInt(),
+                    initial.getAsDouble(), fin.getAsDouble(), method.orElseThrow());
+            return Optional.of(new Study.StudyCable(limit, sizeText,
+                    fault.map(f -> new Study.CurrentRange(f[0], f[1])), initialSource, finalSource));
         } catch (IllegalArgumentException e) {
             b.problem(m, path, e.getMessage());
-            return null;
+            return Optional.empty();
         }
     }
 
-    private double loadTemperature(Node.MapNode m, String path, Insulation ins) {
+    private OptionalDouble loadTemperature(Node.MapNode m, String path, Insulation ins) {
         String p = path + ".load";
-        Node.MapNode load = b.map(b.value(m, "load"), p);
-        if (load == null) {
-            return Double.NaN;
+        Optional<Node.MapNode> mapped = b.map(b.value(m, "load"), p);
+        if (mapped.isEmpty()) {
+            return OptionalDouble.empty();
         }
+        Node.MapNode load = mapped.get();
         b.allowOnly(load, p, "current_a", "rated_a", "ambient_c");
-        double current = b.number(load, p, "current_a", true, Double.NaN, 0, false, 1e6, "A");
-        double rated = b.number(load, p, "rated_a", true, Double.NaN, 0, true, 1e6, "A");
-        double ambient = b.number(load, p, "ambient_c", false, 30, -50, false, 100, "°C");
-        if (Double.isNaN(current) || Double.isNaN(rated) || Double.isNaN(ambient)) {
-            return Double.NaN;
+        OptionalDouble current = b.number(load, p, LOAD_CURRENT);
+        OptionalDouble rated = b.number(load, p, LOAD_RATED);
+        OptionalDouble ambient = b.number(load, p, LOAD_AMBIENT);
+        if (current.isEmpty() || rated.isEmpty() || ambient.isEmpty()) {
+            return OptionalDouble.empty();
         }
-        return CableThermalLimit.initialFromLoad(ambient, ins.maxOperatingCelsius(), current, rated);
+        return OptionalDouble.of(CableThermalLimit.initialFromLoad(ambient.getAsDouble(), ins.maxOperatingCelsius(),
+                current.getAsDouble(), rated.getAsDouble()));
     }
 
     // --------------------------------------------------------------------------------------- devices
 
-    private Study.StudyDevice device(Node n, String path) {
-        Node.MapNode m = b.map(n, path);
-        if (m == null) {
-            return null;
+    private Optional<Study.StudyDevice> device(Node n, String path) {
+        Optional<Node.MapNode> mapped = b.map(n, path);
+        if (mapped.isEmpty()) {
+            return Optional.empty();
         }
-        String type = b.choice(m, path, "type", true, null, TYPES);
-        String id = b.text(m, path, "id", true, "every device needs an id");
-        if (type == null) {
-            return null;
+        Node.MapNode m = mapped.get();
+        Optional<DeviceKind> type = b.choice(m, path, "type", TYPES);
+        Optional<String> id = b.text(m, path, "id", "every device needs an id");
+        if (type.isEmpty()) {
+            return Optional.empty();
         }
-        double kv = b.number(m, path, "voltage_kv", false, studyKv, 0, true, 1000, "kV");
+        OptionalDouble kv = studyKv.isPresent() ? b.number(m, path, VOLTAGE.orElse(studyKv.getAsDouble()))
+                : b.number(m, path, VOLTAGE);
         int before = b.problemCount();
-        List<String> settings = new ArrayList<>();
-        ProtectiveDevice device;
+        Optional<ProtectiveDevice> device;
+        String who = id.orElse(null);
         try {
-            device = switch (type) {
-                case "relay" -> relay(m, path, id, settings);
-                case "fuse" -> fuse(m, path, id, settings);
-                case "breaker" -> breaker(m, path, id, settings);
-                default -> mcb(m, path, id, settings);
+            device = switch (type.get()) {
+                case RELAY -> relay(m, path, who);
+                case FUSE -> fuse(m, path, who);
+                case BREAKER -> breaker(m, path, who);
+                case MCB -> mcb(m, path, who);
             };
         } catch (IllegalArgumentException e) {
             // a combination of settings the model refuses, each valid on its own
             b.problem(m, path, e.getMessage());
-            return null;
+            return Optional.empty();
         }
-        if (device == null || id == null || Double.isNaN(kv) || b.problemCount() > before) {
-            return null;
+        if (device.isEmpty() || id.isEmpty() || kv.isEmpty() || b.problemCount() > before) {
+            return Optional.empty();
         }
-        double factor = Double.isNaN(studyKv) ? 1.0 : kv / studyKv;
-        if (factor != 1.0) {
-            settings.add("at " + Checks.format(kv) + " kV: currents x" + Checks.format(factor) + " on the chart");
-        }
-        return new Study.StudyDevice(device, kv, device.referredBy(factor), settings);
+        double factor = studyKv.isEmpty() ? 1.0 : kv.getAsDouble() / studyKv.getAsDouble();
+        return Optional.of(new Study.StudyDevice(device.get(), kv.getAsDouble(), factor,
+                device.get().referredBy(factor)));
     }
 
-    private ProtectiveDevice relay(Node.MapNode m, String path, String id, List<String> settings) {
+    private Optional<ProtectiveDevice> relay(Node.MapNode m, String path, String id) {
         b.allowOnly(m, path, "id", "type", "voltage_kv", "breaker_s", "ct", "stages");
-        double breaker = b.number(m, path, "breaker_s", false, 0, 0, false, 10, "s");
-        double ratio = 1;
-        String ctText = "";
+        int before = b.problemCount();
+        OptionalDouble breaker = b.number(m, path, BREAKER_TIME);
+        Optional<CurrentTransformer> ct = Optional.empty();
         if (b.has(m, "ct")) {
             String p = path + ".ct";
-            Node.MapNode ct = b.map(b.value(m, "ct"), p);
-            if (ct != null) {
-                b.allowOnly(ct, p, "primary_a", "secondary_a");
-                double pri = b.number(ct, p, "primary_a", true, Double.NaN, 0, true, 1e6, "A");
-                double sec = b.number(ct, p, "secondary_a", true, Double.NaN, 0, true, 100, "A");
-                ratio = pri / sec;
-                ctText = "CT " + Checks.format(pri) + "/" + Checks.format(sec) + " A, settings in secondary A";
-            } else {
-                ratio = Double.NaN;
+            Optional<Node.MapNode> ctMap = b.map(b.value(m, "ct"), p);
+            if (ctMap.isPresent()) {
+                b.allowOnly(ctMap.get(), p, "primary_a", "secondary_a");
+                OptionalDouble pri = b.number(ctMap.get(), p, CT_PRIMARY);
+                OptionalDouble sec = b.number(ctMap.get(), p, CT_SECONDARY);
+                if (pri.isPresent() && sec.isPresent()) {
+                    ct = Optional.of(new CurrentTransformer(pri.getAsDouble(), sec.getAsDouble()));
+                }
             }
         }
         if (!b.has(m, "stages")) {
             b.missing(m, path, "stages", "a relay needs at least one stage");
-            return null;
+            return Optional.empty();
         }
-        List<Node> stageNodes = b.list(b.value(m, "stages"), path + ".stages");
-        if (stageNodes == null) {
-            return null;
-        }
+        Optional<List<Node>> stageNodes = b.list(b.value(m, "stages"), path + ".stages");
         if (stageNodes.isEmpty()) {
-            b.problem(b.value(m, "stages"), path + ".stages", "found no stages - a relay needs at least one");
-            return null;
+            return Optional.empty();
         }
-        if (stageNodes.size() > 10) {
-            b.problem(b.value(m, "stages"), path + ".stages", "found " + stageNodes.size()
-                    + " stages - at most 10 are accepted");
-            return null;
+        if (stageNodes.get().isEmpty()) {
+            b.problem(b.value(m, "stages"), path + ".stages", "found no stages - a relay needs at least one");
+            return Optional.empty();
+        }
+        if (stageNodes.get().size() > MAX_STAGES) {
+            b.problem(b.value(m, "stages"), path + ".stages", "found " + stageNodes.get().size()
+                    + " stages - at most " + MAX_STAGES + " are accepted");
+            return Optional.empty();
         }
         List<TimeCurrentCurve> stages = new ArrayList<>();
-        for (int i = 0; i < stageNodes.size(); i++) {
-            TimeCurrentCurve s = stage(stageNodes.get(i), path + ".stages[" + i + "]", settings);
-            if (s != null) {
-                stages.add(s);
-            }
+        for (int i = 0; i < stageNodes.get().size(); i++) {
+            stage(stageNodes.get().get(i), path + ".stages[" + i + "]").ifPresent(stages::add);
         }
-        if (stages.size() != stageNodes.size() || Double.isNaN(breaker) || Double.isNaN(ratio) || id == null) {
-            return null;
+        if (b.problemCount() > before || stages.size() != stageNodes.get().size() || id == null) {
+            return Optional.empty();
         }
-        if (!ctText.isEmpty()) {
-            settings.add(ctText);
-        }
-        if (breaker > 0) {
-            settings.add("breaker interrupting time " + Checks.format(breaker) + " s");
-        }
-        return new Relay(id, stages, ratio, breaker);
+        return Optional.of(new Relay(id, stages, ct, breaker.getAsDouble()));
     }
 
-    private TimeCurrentCurve stage(Node n, String path, List<String> settings) {
-        Node.MapNode m = b.map(n, path);
-        if (m == null) {
-            return null;
+    private Optional<TimeCurrentCurve> stage(Node n, String path) {
+        Optional<Node.MapNode> mapped = b.map(n, path);
+        if (mapped.isEmpty()) {
+            return Optional.empty();
         }
-        String curve = b.choice(m, path, "curve", true, null, CURVES);
-        if (curve == null) {
-            return null;
+        Node.MapNode m = mapped.get();
+        Optional<String> curve = b.choice(m, path, "curve", CURVES);
+        if (curve.isEmpty()) {
+            return Optional.empty();
         }
-        double pickup = b.number(m, path, "pickup_a", true, Double.NaN, 0, true, 1e6, "A");
-        switch (curve) {
-            case "definite-time" -> {
+        OptionalDouble pickup = b.number(m, path, PICKUP);
+        switch (curve.get()) {
+            case DEFINITE_TIME -> {
                 b.allowOnly(m, path, "curve", "pickup_a", "delay_s");
-                double delay = b.number(m, path, "delay_s", true, Double.NaN, 0, false, 1000, "s");
-                if (Double.isNaN(pickup) || Double.isNaN(delay)) {
-                    return null;
+                OptionalDouble delay = b.number(m, path, DT_DELAY);
+                if (pickup.isEmpty() || delay.isEmpty()) {
+                    return Optional.empty();
                 }
-                settings.add("definite time: pickup " + Checks.format(pickup) + " A, delay " + Checks.format(delay) + " s");
-                return DefiniteTimeStage.definiteTime(pickup, delay);
+                return Optional.of(DefiniteTimeStage.definiteTime(pickup.getAsDouble(), delay.getAsDouble()));
             }
-            case "instantaneous" -> {
+            case INSTANTANEOUS -> {
                 b.allowOnly(m, path, "curve", "pickup_a", "delay_s");
-                double delay = b.number(m, path, "delay_s", false, 0, 0, false, 1, "s");
-                if (Double.isNaN(pickup) || Double.isNaN(delay)) {
-                    return null;
+                OptionalDouble delay = b.number(m, path, INST_DELAY);
+                if (pickup.isEmpty() || delay.isEmpty()) {
+                    return Optional.empty();
                 }
-                settings.add("instantaneous: pickup " + Checks.format(pickup) + " A"
-                        + (delay > 0 ? ", " + Checks.format(delay) + " s" : ""));
-                return DefiniteTimeStage.instantaneous(pickup, delay);
+                return Optional.of(DefiniteTimeStage.instantaneous(pickup.getAsDouble(), delay.getAsDouble()));
             }
             default -> {
-                return inverse(m, path, curve, pickup, settings);
+                return inverse(m, path, curve.get(), pickup);
             }
         }
     }
 
-    private TimeCurrentCurve inverse(Node.MapNode m, String path, String curve, double pickup, List<String> settings) {
-        boolean custom = curve.equals("custom");
-        InverseTimeFamily family = InverseTimeFamily.byKey(curve);
+    private Optional<TimeCurrentCurve> inverse(Node.MapNode m, String path, String curve, OptionalDouble pickup) {
+        boolean custom = curve.equals(CUSTOM);
+        InverseTimeFamily family = custom ? null : InverseTimeFamily.byKey(curve);
         List<String> allowed = new ArrayList<>(List.of("curve", "pickup_a", "high_current", "upper_multiple"));
-        String multiplierKey;
+        MultiplierKind kind;
         if (custom) {
-            allowed.addAll(List.of("a_s", "b_s", "p", "reset_s", "tms", "time_dial"));
-            multiplierKey = b.has(m, "time_dial") ? "time_dial" : "tms";
-            if (b.has(m, "time_dial") && b.has(m, "tms")) {
+            allowed.addAll(List.of("a_s", "b_s", "p", "reset_s"));
+            kind = b.has(m, MultiplierKind.TIME_DIAL.key()) ? MultiplierKind.TIME_DIAL : MultiplierKind.TMS;
+            for (MultiplierKind k : MultiplierKind.values()) {
+                allowed.add(k.key());
+            }
+            if (b.has(m, MultiplierKind.TIME_DIAL.key()) && b.has(m, MultiplierKind.TMS.key())) {
                 b.problem(b.value(m, "time_dial"), path + ".time_dial", "give either tms or time_dial, not both");
             }
         } else {
-            multiplierKey = family.isIeee() ? "time_dial" : "tms";
-            allowed.add(multiplierKey);
-            String other = family.isIeee() ? "tms" : "time_dial";
-            if (b.has(m, other)) {
-                b.problemAtKey(m.entries().get(other), path + "." + other, curve + " is set by " + multiplierKey
-                        + ", not " + other);
-                allowed.add(other);
+            kind = family.multiplierKind();
+            allowed.add(kind.key());
+            for (MultiplierKind other : MultiplierKind.values()) {
+                if (other != kind && b.has(m, other.key())) {
+                    b.problemAtKey(m.entries().get(other.key()), path + "." + other.key(), curve + " is set by "
+                            + kind.key() + ", not " + other.key());
+                    allowed.add(other.key());
+                }
             }
         }
-        b.allowOnly(m, path, allowed.toArray(new String[0]));
-        double multiplier = b.number(m, path, multiplierKey, true, Double.NaN, 0, true, 100, "");
-        String hc = b.choice(m, path, "high_current", false, "follow", List.of("follow", "hold"));
-        double upper = b.number(m, path, "upper_multiple", false, InverseTimeStage.STANDARD_UPPER_MULTIPLE, 1, true,
-                1000, "");
+        allowed.add(kind.rangeKey());
+        b.allowOnly(m, path, allowed);
+        int before = b.problemCount();
+        OptionalDouble multiplier = b.number(m, path, MULTIPLIER_LIMITS.required().named(kind.key()));
+        Optional<SettingRange> range = settingRange(m, path, kind, multiplier);
+        Optional<HighCurrentBehaviour> hc = b.choice(m, path, "high_current", HIGH_CURRENT,
+                HighCurrentBehaviour.FOLLOW_EQUATION);
+        OptionalDouble upper = b.number(m, path, UPPER_MULTIPLE);
         double a;
         double bb;
         double p;
         double reset;
         if (custom) {
-            a = b.number(m, path, "a_s", true, Double.NaN, 0, true, 1e4, "s");
-            bb = b.number(m, path, "b_s", false, 0, 0, false, 1e3, "s");
-            p = b.number(m, path, "p", true, Double.NaN, 0, true, 10, "");
-            reset = b.number(m, path, "reset_s", false, Double.NaN, 0, true, 1e4, "s");
-            if (b.has(m, "reset_s") && Double.isNaN(reset)) {
-                return null;
-            }
+            a = b.number(m, path, CONSTANT_A).orElse(1);
+            bb = b.number(m, path, CONSTANT_B).orElse(0);
+            p = b.number(m, path, EXPONENT).orElse(1);
+            reset = b.number(m, path, RESET).orElse(Double.NaN);
         } else {
             a = family.aSeconds();
             bb = family.bSeconds();
             p = family.exponent();
             reset = family.resetSeconds();
         }
-        if (Double.isNaN(pickup) || Double.isNaN(multiplier) || hc == null || Double.isNaN(upper) || Double.isNaN(a)
-                || Double.isNaN(bb) || Double.isNaN(p)) {
-            return null;
+        if (b.problemCount() > before || pickup.isEmpty()) {
+            return Optional.empty();
         }
-        HighCurrentBehaviour behaviour = hc.equals("hold") ? HighCurrentBehaviour.HOLD_AT_UPPER_MULTIPLE
-                : HighCurrentBehaviour.FOLLOW_EQUATION;
-        settings.add(curve + ": pickup " + Checks.format(pickup) + " A, " + multiplierKey.replace('_', ' ') + " "
-                + Checks.format(multiplier) + (behaviour == HighCurrentBehaviour.HOLD_AT_UPPER_MULTIPLE
-                ? ", held above " + Checks.format(upper) + "x" : ""));
-        return new InverseTimeStage(a, bb, p, reset, pickup, multiplier, behaviour, upper, curve);
+        return Optional.of(new InverseTimeStage(a, bb, p, reset, pickup.getAsDouble(), multiplier.getAsDouble(), kind,
+                range.orElseThrow(), hc.orElseThrow(), upper.getAsDouble(), curve));
     }
 
-    private ProtectiveDevice fuse(Node.MapNode m, String path, String id, List<String> settings) {
+    /** The stated setting range of a multiplier, or the kind's default widened to the setting. */
+    private Optional<SettingRange> settingRange(Node.MapNode m, String path, MultiplierKind kind,
+            OptionalDouble multiplier) {
+        if (!b.has(m, kind.rangeKey())) {
+            return multiplier.isPresent() ? Optional.of(kind.defaultRange().including(multiplier.getAsDouble()))
+                    : Optional.empty();
+        }
+        Optional<double[]> pair = pair(m, path, kind.rangeKey(), MULTIPLIER_LIMITS);
+        if (pair.isEmpty()) {
+            return Optional.empty();
+        }
+        SettingRange r = new SettingRange(pair.get()[0], pair.get()[1]);
+        if (multiplier.isPresent() && !r.contains(multiplier.getAsDouble())) {
+            b.problem(b.value(m, kind.rangeKey()), Binder.join(path, kind.rangeKey()), "the " + kind.key() + " "
+                    + Checks.format(multiplier.getAsDouble()) + " lies outside the stated range " + r
+                    + " - widen the range or change the setting");
+            return Optional.empty();
+        }
+        return Optional.of(r);
+    }
+
+    private Optional<ProtectiveDevice> fuse(Node.MapNode m, String path, String id) {
         b.allowOnly(m, path, "id", "type", "voltage_kv", "rating_a", "melting", "clearing", "clearing_i2t_a2s");
-        double rating = b.number(m, path, "rating_a", true, Double.NaN, 0, true, 1e5, "A");
-        double i2t = b.number(m, path, "clearing_i2t_a2s", false, Double.NaN, 0, true, 1e12, "A2s");
-        if (b.has(m, "clearing_i2t_a2s") && Double.isNaN(i2t)) {
-            return null;
+        int before = b.problemCount();
+        OptionalDouble rating = b.number(m, path, FUSE_RATING);
+        OptionalDouble i2t = b.number(m, path, FUSE_I2T);
+        if (b.problemCount() > before && b.has(m, FUSE_I2T.key()) && i2t.isEmpty()) {
+            return Optional.empty();
         }
         String who = "fuse '" + id + "'";
-        TabulatedCurve melting = tabulated(m, path, "melting", who + ": melting");
-        TabulatedCurve clearing = tabulated(m, path, "clearing", who + ": clearing");
-        if (Double.isNaN(rating) || melting == null || clearing == null || id == null) {
-            return null;
+        Optional<TabulatedCurve> melting = tabulated(m, path, "melting", who + ": melting");
+        Optional<TabulatedCurve> clearing = tabulated(m, path, "clearing", who + ": clearing");
+        if (rating.isEmpty() || melting.isEmpty() || clearing.isEmpty() || id == null) {
+            return Optional.empty();
         }
         try {
-            Fuse f = new Fuse(id, rating, melting, clearing, Double.isNaN(i2t) ? OptionalDouble.empty()
-                    : OptionalDouble.of(i2t));
-            settings.add("rating " + Checks.format(rating) + " A, " + melting.amps().length + " melting and "
-                    + clearing.amps().length + " clearing points");
-            if (!Double.isNaN(i2t)) {
-                settings.add("clearing I²t " + Checks.format(i2t) + " A²s");
-            }
-            return f;
+            return Optional.of(new Fuse(id, rating.getAsDouble(), melting.get(), clearing.get(), i2t));
         } catch (IllegalArgumentException e) {
             b.problem(b.value(m, "clearing"), path + ".clearing", e.getMessage());
-            return null;
+            return Optional.empty();
         }
     }
 
-    private TabulatedCurve tabulated(Node.MapNode m, String path, String key, String label) {
-        double[][] pts = b.points(m, path, key, true, MAX_POINTS);
-        if (pts == null) {
-            return null;
+    private Optional<TabulatedCurve> tabulated(Node.MapNode m, String path, String key, String label) {
+        Optional<double[][]> pts = b.points(m, path, key, MAX_POINTS);
+        if (pts.isEmpty()) {
+            return Optional.empty();
         }
-        int bad = TabulatedCurve.violation(pts[0], pts[1]);
+        double[] amps = pts.get()[0];
+        double[] seconds = pts.get()[1];
+        int bad = TabulatedCurve.violation(amps, seconds);
         if (bad >= 0) {
             List<Node> items = ((Node.ListNode) b.value(m, key)).items();
-            b.problem(items.get(bad), path + "." + key + "[" + bad + "]", TabulatedCurve.problem(label, pts[0], pts[1]));
-            return null;
+            b.problem(items.get(bad), path + "." + key + "[" + bad + "]", TabulatedCurve.problem(label, amps, seconds));
+            return Optional.empty();
         }
-        return new TabulatedCurve(label, pts[0], pts[1]);
+        return Optional.of(new TabulatedCurve(label, amps, seconds));
     }
 
-    private ProtectiveDevice breaker(Node.MapNode m, String path, String id, List<String> settings) {
+    private Optional<ProtectiveDevice> breaker(Node.MapNode m, String path, String id) {
         b.allowOnly(m, path, "id", "type", "voltage_kv", "ir_a", "tr_s", "isd_a", "tsd_s", "tsd_i2t", "ii_a",
                 "pickup_tolerance", "time_tolerance", "long_time_band", "instantaneous_s");
-        double ir = b.number(m, path, "ir_a", true, Double.NaN, 0, true, 1e5, "A");
-        double tr = b.number(m, path, "tr_s", true, Double.NaN, 0, true, 1000, "s");
-        double isd = b.number(m, path, "isd_a", false, Double.POSITIVE_INFINITY, 0, true, 1e6, "A");
-        double tsd = b.number(m, path, "tsd_s", b.has(m, "isd_a"), 0, 0, false, 10, "s");
-        Boolean ramp = b.bool(m, path, "tsd_i2t", false);
-        double ii = b.number(m, path, "ii_a", false, Double.POSITIVE_INFINITY, 0, true, 1e6, "A");
-        double pt = b.number(m, path, "pickup_tolerance", false, 0.10, 0, false, 0.5, "");
-        double tt = b.number(m, path, "time_tolerance", false, 0.20, 0, false, 0.5, "");
-        double[] band = pair(m, path, "long_time_band", new double[] {1.05, 1.30});
-        double[] inst = pair(m, path, "instantaneous_s", new double[] {0.01, 0.05});
-        if (Double.isNaN(ir) || Double.isNaN(tr) || Double.isNaN(isd) || Double.isNaN(tsd) || ramp == null
-                || Double.isNaN(ii) || Double.isNaN(pt) || Double.isNaN(tt) || band == null || inst == null
-                || id == null) {
-            return null;
+        int before = b.problemCount();
+        OptionalDouble ir = b.number(m, path, IR);
+        OptionalDouble tr = b.number(m, path, TR);
+        OptionalDouble isd = b.number(m, path, ISD);
+        OptionalDouble tsd = b.number(m, path, b.has(m, ISD.key()) ? TSD.required() : TSD);
+        Optional<Boolean> ramp = b.bool(m, path, "tsd_i2t", false);
+        OptionalDouble ii = b.number(m, path, II);
+        OptionalDouble pt = b.number(m, path, PICKUP_TOLERANCE);
+        OptionalDouble tt = b.number(m, path, TIME_TOLERANCE);
+        Optional<double[]> band = b.has(m, "long_time_band") ? pair(m, path, "long_time_band", PAIR_ITEM)
+                : Optional.of(new double[] {1.05, 1.30});
+        Optional<double[]> inst = b.has(m, "instantaneous_s") ? pair(m, path, "instantaneous_s", PAIR_ITEM)
+                : Optional.of(new double[] {0.01, 0.05});
+        if (b.problemCount() > before || id == null) {
+            return Optional.empty();
         }
-        try {
-            TripUnitBreaker.Settings s = new TripUnitBreaker.Settings(ir, tr, isd, tsd, ramp, ii, inst[0], inst[1],
-                    band[0], band[1], pt, tt);
-            settings.add("long time: Ir " + Checks.format(ir) + " A, tr " + Checks.format(tr) + " s at 6 Ir");
-            if (Double.isFinite(isd)) {
-                settings.add("short time: Isd " + Checks.format(isd) + " A, tsd " + Checks.format(tsd) + " s"
-                        + (ramp ? ", I²t on" : ""));
-            }
-            if (Double.isFinite(ii)) {
-                settings.add("instantaneous: Ii " + Checks.format(ii) + " A");
-            }
-            settings.add("tolerance: pickup ±" + Checks.format(pt * 100) + " %, time ±" + Checks.format(tt * 100) + " %");
-            return new TripUnitBreaker(id, s);
-        } catch (IllegalArgumentException e) {
-            b.problem(m, path, e.getMessage());
-            return null;
-        }
+        TripUnitBreaker.Settings s = new TripUnitBreaker.Settings(ir.getAsDouble(), tr.getAsDouble(),
+                isd.getAsDouble(), tsd.getAsDouble(), ramp.orElseThrow(), ii.getAsDouble(), inst.get()[0],
+                inst.get()[1], band.get()[0], band.get()[1], pt.getAsDouble(), tt.getAsDouble());
+        return Optional.of(new TripUnitBreaker(id, s));
     }
 
-    private double[] pair(Node.MapNode m, String path, String key, double[] dflt) {
-        Node n = b.value(m, key);
-        if (n == null && !b.has(m, key)) {
-            return dflt;
+    /** Two numbers [low, high] with low at most high. */
+    private Optional<double[]> pair(Node.MapNode m, String path, String key, NumberField limits) {
+        Optional<List<Node>> listed = b.list(b.at(m, key), path + "." + key);
+        if (listed.isEmpty()) {
+            return Optional.empty();
         }
-        List<Node> items = b.list(n == null ? m : n, path + "." + key);
-        if (items == null) {
-            return null;
-        }
+        List<Node> items = listed.get();
         if (items.size() != 2) {
-            b.problem(n, path + "." + key, "expected two numbers [low, high], found a list of " + items.size());
-            return null;
+            b.problem(b.value(m, key), path + "." + key, "expected two numbers [low, high], found a list of "
+                    + items.size());
+            return Optional.empty();
         }
-        double lo = b.number(items.get(0), path + "." + key + "[0]", 0, false, 10, "");
-        double hi = b.number(items.get(1), path + "." + key + "[1]", 0, false, 10, "");
-        if (Double.isNaN(lo) || Double.isNaN(hi)) {
-            return null;
+        OptionalDouble lo = b.number(items.get(0), path + "." + key + "[0]", limits.item());
+        OptionalDouble hi = b.number(items.get(1), path + "." + key + "[1]", limits.item());
+        if (lo.isEmpty() || hi.isEmpty()) {
+            return Optional.empty();
         }
-        if (hi < lo) {
-            b.problem(items.get(1), path + "." + key + "[1]", "found " + Checks.format(hi)
-                    + " - must be at or above the first value, " + Checks.format(lo));
-            return null;
+        if (hi.getAsDouble() < lo.getAsDouble()) {
+            b.problem(items.get(1), path + "." + key + "[1]", "found " + Checks.format(hi.getAsDouble())
+                    + " - must be at or above the first value, " + Checks.format(lo.getAsDouble()));
+            return Optional.empty();
         }
-        return new double[] {lo, hi};
+        return Optional.of(new double[] {lo.getAsDouble(), hi.getAsDouble()});
     }
 
-    private ProtectiveDevice mcb(Node.MapNode m, String path, String id, List<String> settings) {
+    private Optional<ProtectiveDevice> mcb(Node.MapNode m, String path, String id) {
         b.allowOnly(m, path, "id", "type", "voltage_kv", "curve_type", "rating_a", "fastest_s", "let_through_i2t_a2s");
-        String t = b.choice(m, path, "curve_type", true, null, List.of("B", "C", "D"));
-        double rating = b.number(m, path, "rating_a", true, Double.NaN, 0, true, 125, "A");
-        double fastest = b.number(m, path, "fastest_s", false, MiniatureBreaker.DEFAULT_FASTEST_SECONDS, 0, false, 0.1,
-                "s");
-        double i2t = b.number(m, path, "let_through_i2t_a2s", false, Double.NaN, 0, true, 1e9, "A2s");
-        if (t == null || Double.isNaN(rating) || Double.isNaN(fastest) || id == null
-                || b.has(m, "let_through_i2t_a2s") && Double.isNaN(i2t)) {
-            return null;
+        int before = b.problemCount();
+        Optional<McbType> t = b.choice(m, path, "curve_type", MCB_TYPES);
+        OptionalDouble rating = b.number(m, path, MCB_RATING);
+        OptionalDouble fastest = b.number(m, path, MCB_FASTEST);
+        OptionalDouble i2t = b.number(m, path, MCB_I2T);
+        if (b.problemCount() > before || id == null) {
+            return Optional.empty();
         }
-        settings.add("type " + t + ", In " + Checks.format(rating) + " A (IEC 60898-1)");
-        if (!Double.isNaN(i2t)) {
-            settings.add("let-through I²t " + Checks.format(i2t) + " A²s");
-        }
-        return new MiniatureBreaker(id, McbType.valueOf(t), rating, fastest, i2t);
+        return Optional.of(new MiniatureBreaker(id, t.orElseThrow(), rating.getAsDouble(), fastest.getAsDouble(),
+                i2t.orElse(Double.NaN)));
     }
 
     // ---------------------------------------------------------------------------------------- checks
 
-    private Study.StudyCheck check(Node n, String path, Map<String, Study.StudyCable> cables,
+    private Optional<Study.StudyCheck> check(Node n, String path, Map<String, Study.StudyCable> cables,
             Map<String, Study.StudyDevice> devices) {
-        Node.MapNode m = b.map(n, path);
-        if (m == null) {
-            return null;
+        Optional<Node.MapNode> mapped = b.map(n, path);
+        if (mapped.isEmpty()) {
+            return Optional.empty();
         }
+        Node.MapNode m = mapped.get();
         if (b.has(m, "cable") || b.has(m, "device")) {
-            b.allowOnly(m, path, "cable", "device", "margin_s", "margin_ratio", "range_ka", "dc_offset");
-            String cable = reference(m, path, "cable", cables.keySet(), "cable");
-            String device = reference(m, path, "device", devices.keySet(), "device");
-            MarginRequirement req = MarginRequirement.seconds(0);
-            if (b.has(m, "margin_s") && b.has(m, "margin_ratio")) {
-                b.problem(b.value(m, "margin_ratio"), path + ".margin_ratio", "give either margin_s or margin_ratio, not both");
-                return null;
-            } else if (b.has(m, "margin_ratio")) {
-                double r = b.number(m, path, "margin_ratio", true, Double.NaN, 1, false, 1e6, "");
-                req = Double.isNaN(r) ? null : MarginRequirement.ratio(r);
-            } else {
-                double s = b.number(m, path, "margin_s", false, 0, 0, false, 1e4, "s");
-                req = Double.isNaN(s) ? null : MarginRequirement.seconds(s);
-            }
-            double[] range = b.rangeKa(m, path, "range_ka", false);
-            DcOffset dc = null;
-            if (b.has(m, "dc_offset")) {
-                String p = path + ".dc_offset";
-                Node.MapNode d = b.map(b.value(m, "dc_offset"), p);
-                if (d == null) {
-                    return null;
-                }
-                b.allowOnly(d, p, "kappa");
-                double kappa = b.number(d, p, "kappa", true, Double.NaN, 1, true, 2, "");
-                if (Double.isNaN(kappa) || Double.isNaN(frequency)) {
-                    return null;
-                }
-                dc = new DcOffset(kappa, frequency);
-            }
-            if (cable == null || device == null || req == null || b.has(m, "range_ka") && range == null) {
-                return null;
-            }
-            if (range == null) {
-                Study.StudyCable c = cables.get(cable);
-                if (Double.isNaN(c.faultMinAmps())) {
-                    b.problem(m, path + ".range_ka", "missing - cable '" + cable
-                            + "' has no fault_ka, so the check needs its own range_ka");
-                    return null;
-                }
-                range = new double[] {c.faultMinAmps(), c.faultMaxAmps()};
-            }
-            return new Study.CableCheckSpec(cable, device, req, range[0], range[1], dc);
+            return cableCheck(m, path, cables, devices);
         }
         if (b.has(m, "upstream") || b.has(m, "downstream")) {
-            b.allowOnly(m, path, "upstream", "downstream", "interval_s", "rating_ratio", "no_overlap", "range_ka");
-            String up = reference(m, path, "upstream", devices.keySet(), "device");
-            String down = reference(m, path, "downstream", devices.keySet(), "device");
-            int given = (b.has(m, "interval_s") ? 1 : 0) + (b.has(m, "rating_ratio") ? 1 : 0)
-                    + (b.has(m, "no_overlap") ? 1 : 0);
-            GradingRequirement req = null;
-            if (given > 1) {
-                b.problem(m, path, "give one of interval_s, rating_ratio or no_overlap, not several");
-            } else if (b.has(m, "rating_ratio")) {
-                double r = b.number(m, path, "rating_ratio", true, Double.NaN, 1, false, 1000, "");
-                req = Double.isNaN(r) ? null : GradingRequirement.ratingRatio(r);
-                if (req != null && up != null && down != null && (!(devices.get(up).device() instanceof Fuse)
-                        || !(devices.get(down).device() instanceof Fuse))) {
-                    b.problem(b.value(m, "rating_ratio"), path + ".rating_ratio",
-                            "a rating ratio applies to two fuses - use interval_s or no_overlap for other devices");
-                    req = null;
-                }
-            } else if (b.has(m, "no_overlap")) {
-                Boolean v = b.bool(m, path, "no_overlap", true);
-                if (Boolean.FALSE.equals(v)) {
-                    b.problem(b.value(m, "no_overlap"), path + ".no_overlap", "found false - write no_overlap: true, "
-                            + "or give interval_s instead");
-                } else if (v != null) {
-                    req = GradingRequirement.noOverlap();
-                }
-            } else {
-                double s = b.number(m, path, "interval_s", true, Double.NaN, 0, false, 100, "s");
-                req = Double.isNaN(s) ? null : GradingRequirement.intervalSeconds(s);
-            }
-            double[] range = b.rangeKa(m, path, "range_ka", true);
-            if (up != null && up.equals(down)) {
-                b.problem(b.value(m, "downstream"), path + ".downstream", "the same device as upstream, '" + up + "'");
-                return null;
-            }
-            if (up == null || down == null || req == null || range == null) {
-                return null;
-            }
-            return new Study.GradingCheckSpec(up, down, req, range[0], range[1]);
+            return gradingCheck(m, path, devices);
         }
         b.problem(m, path, "a check names either cable and device (a cable check) or upstream and downstream"
                 + " (a grading check)");
-        return null;
+        return Optional.empty();
     }
 
-    private String reference(Node.MapNode m, String path, String key, java.util.Set<String> ids, String what) {
-        String v = b.text(m, path, key, true, "the id of a " + what);
-        if (v == null) {
-            return null;
+    private Optional<Study.StudyCheck> cableCheck(Node.MapNode m, String path, Map<String, Study.StudyCable> cables,
+            Map<String, Study.StudyDevice> devices) {
+        b.allowOnly(m, path, "cable", "device", "margin_s", "margin_ratio", "range_ka", "dc_offset");
+        int before = b.problemCount();
+        Optional<String> cable = reference(m, path, "cable", cables.keySet(), "cable");
+        Optional<String> device = reference(m, path, "device", devices.keySet(), "device");
+        Optional<MarginRequirement> req;
+        if (b.has(m, "margin_s") && b.has(m, "margin_ratio")) {
+            b.problem(b.value(m, "margin_ratio"), path + ".margin_ratio", "give either margin_s or margin_ratio, not both");
+            return Optional.empty();
+        } else if (b.has(m, "margin_ratio")) {
+            req = optional(b.number(m, path, MARGIN_RATIO)).map(MarginRequirement::ratio);
+        } else {
+            req = optional(b.number(m, path, MARGIN_SECONDS)).map(MarginRequirement::seconds);
         }
-        if (!ids.contains(v) && declared.contains(what + ":" + v)) {
+        Optional<double[]> range = b.rangeKa(m, path, "range_ka", false);
+        Optional<DcOffset> dc = Optional.empty();
+        if (b.has(m, "dc_offset")) {
+            String p = path + ".dc_offset";
+            Optional<Node.MapNode> d = b.map(b.value(m, "dc_offset"), p);
+            if (d.isEmpty()) {
+                return Optional.empty();
+            }
+            b.allowOnly(d.get(), p, "kappa");
+            OptionalDouble kappa = b.number(d.get(), p, KAPPA);
+            if (kappa.isEmpty() || frequency.isEmpty()) {
+                return Optional.empty();
+            }
+            dc = Optional.of(new DcOffset(kappa.getAsDouble(), frequency.getAsDouble()));
+        }
+        if (b.problemCount() > before || cable.isEmpty() || device.isEmpty() || req.isEmpty()) {
+            return Optional.empty();
+        }
+        Optional<Study.CurrentRange> checked = range.map(r -> new Study.CurrentRange(r[0], r[1]));
+        if (checked.isEmpty()) {
+            checked = cables.get(cable.get()).fault();
+            if (checked.isEmpty()) {
+                b.problem(m, path + ".range_ka", "missing - cable '" + cable.get()
+                        + "' has no fault_ka, so the check needs its own range_ka");
+                return Optional.empty();
+            }
+        }
+        return Optional.of(new Study.CableCheckSpec(cable.get(), device.get(), req.get(), checked.get(), dc));
+    }
+
+    private Optional<Study.StudyCheck> gradingCheck(Node.MapNode m, String path, Map<String, Study.StudyDevice> devices) {
+        b.allowOnly(m, path, "upstream", "downstream", "interval_s", "rating_ratio", "no_overlap", "range_ka");
+        Optional<String> up = reference(m, path, "upstream", devices.keySet(), "device");
+        Optional<String> down = reference(m, path, "downstream", devices.keySet(), "device");
+        int given = (b.has(m, "interval_s") ? 1 : 0) + (b.has(m, "rating_ratio") ? 1 : 0)
+                + (b.has(m, "no_overlap") ? 1 : 0);
+        Optional<GradingRequirement> req = Optional.empty();
+        if (given > 1) {
+            b.problem(m, path, "give one of interval_s, rating_ratio or no_overlap, not several");
+        } else if (b.has(m, "rating_ratio")) {
+            req = optional(b.number(m, path, RATING_RATIO)).map(GradingRequirement::ratingRatio);
+            if (req.isPresent() && up.isPresent() && down.isPresent()
+                    && (!(devices.get(up.get()).device() instanceof Fuse)
+                    || !(devices.get(down.get()).device() instanceof Fuse))) {
+                b.problem(b.value(m, "rating_ratio"), path + ".rating_ratio",
+                        "a rating ratio applies to two fuses - use interval_s or no_overlap for other devices");
+                req = Optional.empty();
+            }
+        } else if (b.has(m, "no_overlap")) {
+            Optional<Boolean> v = b.bool(m, path, "no_overlap", true);
+            if (v.isPresent() && !v.get()) {
+                b.problem(b.value(m, "no_overlap"), path + ".no_overlap", "found false - write no_overlap: true, "
+                        + "or give interval_s instead");
+            } else if (v.isPresent()) {
+                req = Optional.of(GradingRequirement.noOverlap());
+            }
+        } else {
+            req = optional(b.number(m, path, INTERVAL)).map(GradingRequirement::intervalSeconds);
+        }
+        Optional<double[]> range = b.rangeKa(m, path, "range_ka", true);
+        if (up.isPresent() && up.equals(down)) {
+            b.problem(b.value(m, "downstream"), path + ".downstream", "the same device as upstream, '" + up.get() + "'");
+            return Optional.empty();
+        }
+        if (up.isEmpty() || down.isEmpty() || req.isEmpty() || range.isEmpty()) {
+            return Optional.empty();
+        }
+        return Optional.of(new Study.GradingCheckSpec(up.get(), down.get(), req.get(),
+                new Study.CurrentRange(range.get()[0], range.get()[1])));
+    }
+
+    private static Optional<Double> optional(OptionalDouble v) {
+        return v.isPresent() ? Optional.of(v.getAsDouble()) : Optional.empty();
+    }
+
+    private Optional<String> reference(Node.MapNode m, String path, String key, Set<String> ids, String what) {
+        Optional<String> v = b.text(m, path, key, "the id of a " + what);
+        if (v.isEmpty()) {
+            return Optional.empty();
+        }
+        if (!ids.contains(v.get()) && declared.contains(what + ":" + v.get())) {
             // declared but invalid: its own problems are reported where it is declared
-            return null;
+            return Optional.empty();
         }
-        if (!ids.contains(v)) {
+        if (!ids.contains(v.get())) {
             // suggest among every declared id, valid or not: the author's typo is in this reference
             List<String> known = declared.stream().filter(d -> d.startsWith(what + ":"))
                     .map(d -> d.substring(what.length() + 1)).sorted().toList();
-            String hint = Binder.suggestion(v, known.toArray(new String[0]));
-            b.problem(b.value(m, key), Binder.join(path, key), "no " + what + " has the id '" + v + "'"
+            String hint = Binder.suggestion(v.get(), known);
+            b.problem(b.value(m, key), Binder.join(path, key), "no " + what + " has the id '" + v.get() + "'"
                     + (hint != null ? " - did you mean '" + hint + "'?" : known.isEmpty() ? " - the study has none"
                     : " - known: " + String.join(", ", known)));
-            return null;
+            return Optional.empty();
         }
         return v;
     }

@@ -52,7 +52,7 @@ final class YamlTreeReader {
      * @return the root node, or null if the document could not be parsed (problems then say why)
      */
     Node read(String text) {
-        try (YAMLParser p = (YAMLParser) FACTORY.createParser(text)) {
+        try (YAMLParser p = FACTORY.createParser(text)) {
             parser = p;
             JsonToken t = p.nextToken();
             if (t == null) {

@@ -82,8 +82,7 @@ class InverseTimeStageTest {
 
     @Test
     void userCoefficientsFollowTheGeneralForm() {
-        InverseTimeStage stage = new InverseTimeStage(10, 0.5, 1.5, Double.NaN, 100, 2, HighCurrentBehaviour.FOLLOW_EQUATION,
-                20, "user");
+        InverseTimeStage stage = InverseTimeStage.custom(10, 0.5, 1.5, 100, MultiplierKind.TMS, 2);
         // 2 x (10 / (4^1.5 - 1) + 0.5) = 2 x (10/7 + 0.5)
         assertThat(stage.seconds(400), closeTo(2 * (10.0 / 7 + 0.5), 1e-12));
     }

@@ -24,7 +24,7 @@ public final class RandomDevices {
         double pickup = logUniform(r, 20, 2000);
         List<TimeCurrentCurve> stages = new ArrayList<>();
         InverseTimeFamily f = InverseTimeFamily.values()[r.nextInt(InverseTimeFamily.values().length)];
-        double mult = f.isIeee() ? logUniform(r, 0.5, 10) : logUniform(r, 0.05, 1.0);
+        double mult = f.multiplierKind() == MultiplierKind.TIME_DIAL ? logUniform(r, 0.5, 10) : logUniform(r, 0.05, 1.0);
         InverseTimeStage inv = InverseTimeStage.of(f, pickup, mult);
         if (r.nextInt(3) == 0) {
             inv = inv.withHighCurrent(HighCurrentBehaviour.HOLD_AT_UPPER_MULTIPLE, 20);

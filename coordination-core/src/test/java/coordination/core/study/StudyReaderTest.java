@@ -48,7 +48,7 @@ class StudyReaderTest {
     void readsTheIssueExample() {
         Study s = StudyReader.parse("study.yaml", "study", VALID);
         assertThat(s.title(), is("Example works - feeder F7"));
-        assertThat(s.cable("F7-cable").faultMinAmps(), is(1500.0));
+        assertThat(s.cable("F7-cable").fault().orElseThrow().fromAmps(), is(1500.0));
         assertThat(s.cable("F7-cable").limit().k(), closeTo(143.08, 0.01));
         assertThat(((Relay) s.device("F7-relay").device()).breakerSeconds(), is(0.05));
         assertThat(s.checks().size(), is(2));
