@@ -6,14 +6,14 @@ import coordination.core.cable.ConductorMaterial;
 import coordination.core.cable.ConductorSizes;
 import coordination.core.cable.Insulation;
 import coordination.core.cable.ThermalMethod;
-import coordination.core.internal.Checks;
-import coordination.core.study.ReportJson;
+import coordination.core.cable.WithstandTable;
+import coordination.core.study.ReportWriter;
+import coordination.plot.Quantities;
 import java.io.PrintStream;
 import java.util.ArrayList;
-import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Locale;
-import java.util.Map;
+import java.util.OptionalDouble;
 import java.util.concurrent.Callable;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Option;
@@ -82,41 +82,39 @@ final class WithstandCommand implements Callable<Integer> {
         double[] ts = times == null ? DEFAULT_TIMES : times.stream().mapToDouble(Double::doubleValue).toArray();
         for (double t : ts) {
             if (!(t > 0) || !Double.isFinite(t)) {
-                return bad("--time: found " + Checks.format(t) + " s - must be above 0 s");
+                return bad("--time: found " + Quantities.asGiven(t) + " s - must be above 0 s");
             }
         }
-        List<double[]> sizes = new ArrayList<>();
+        List<Double> sizes = new ArrayList<>();
         List<String> labels = new ArrayList<>();
         if (size != null) {
             try {
-                double mm2 = size.matches("\\s*[0-9.]+\\s*") ? Double.parseDouble(size.trim()) : ConductorSizes.parseMm2(size);
-                sizes.add(new double[] {mm2});
-                labels.add(size.matches("\\s*[0-9.]+\\s*") ? size.trim() + " mm²" : size.trim());
+                boolean plain = size.matches("\\s*[0-9.]+\\s*");
+                sizes.add(plain ? Double.parseDouble(size.trim()) : ConductorSizes.parseMm2(size));
+                labels.add(plain ? size.trim() + " mm²" : size.trim());
             } catch (CoordinationException | IllegalArgumentException e) {
                 return bad("--size: " + e.getMessage());
             }
         } else {
             for (double s : ConductorSizes.iecSizesMm2()) {
                 if (s >= 1.5 && s <= 630) {
-                    sizes.add(new double[] {s});
-                    labels.add(Checks.format(s) + " mm²");
+                    sizes.add(s);
+                    labels.add(Quantities.asGiven(s) + " mm²");
                 }
             }
         }
-        List<CableThermalLimit> cables = new ArrayList<>();
+        WithstandTable table;
         try {
-            for (double[] s : sizes) {
-                double ti = initial != null ? initial : ins.maxOperatingCelsius();
-                double tf = finalC != null ? finalC : ins.shortCircuitCelsius(s[0]);
-                cables.add(new CableThermalLimit("withstand", m, ins, s[0], parallel, ti, tf, tm));
-            }
+            table = WithstandTable.of(m, ins, tm, parallel, sizes.stream().mapToDouble(Double::doubleValue).toArray(),
+                    labels, initial == null ? OptionalDouble.empty() : OptionalDouble.of(initial),
+                    finalC == null ? OptionalDouble.empty() : OptionalDouble.of(finalC), ts);
         } catch (IllegalArgumentException e) {
             return bad(e.getMessage().replace("cable 'withstand': ", ""));
         }
         switch (output) {
-            case "csv" -> csv(cables, labels, ts);
-            case "json" -> json(cables, labels, ts);
-            default -> text(cables, labels, ts);
+            case "csv" -> csv(table);
+            case "json" -> out.print(ReportWriter.write(table));
+            default -> text(table);
         }
         return ExitCodes.PASS;
     }
@@ -126,71 +124,43 @@ final class WithstandCommand implements Callable<Integer> {
         return ExitCodes.BAD_INPUT;
     }
 
-    private void text(List<CableThermalLimit> cables, List<String> labels, double[] ts) {
-        CableThermalLimit first = cables.get(0);
+    private void text(WithstandTable table) {
+        double[] ts = table.timesSeconds();
+        CableThermalLimit first = table.rows().get(0).cable();
         out.println("Withstand current in kA, " + first.material().key() + " / " + first.insulation().key()
                 + (first.parallel() > 1 ? ", " + first.parallel() + " in parallel" : "") + ", " + first.method().key()
                 + " (I = kS/sqrt(t))");
         StringBuilder h = new StringBuilder(String.format(Locale.ROOT, "%-12s %7s %11s", "size", "k", "from-to °C"));
         for (double t : ts) {
-            h.append(String.format(Locale.ROOT, " %8s", Checks.format(t) + " s"));
+            h.append(String.format(Locale.ROOT, " %8s", Quantities.asGiven(t) + " s"));
         }
         out.println(h);
-        for (int i = 0; i < cables.size(); i++) {
-            CableThermalLimit c = cables.get(i);
-            StringBuilder row = new StringBuilder(String.format(Locale.ROOT, "%-12s %7.1f %11s", labels.get(i), c.k(),
-                    Checks.format(c.initialCelsius()) + "-" + Checks.format(c.finalCelsius())));
-            for (double t : ts) {
-                row.append(String.format(Locale.ROOT, " %8.2f", c.withstandAmps(t) / 1000));
+        for (WithstandTable.Row r : table.rows()) {
+            CableThermalLimit c = r.cable();
+            StringBuilder row = new StringBuilder(String.format(Locale.ROOT, "%-12s %7.1f %11s", r.label(), c.k(),
+                    Quantities.asGiven(c.initialCelsius()) + "-" + Quantities.asGiven(c.finalCelsius())));
+            for (double a : r.withstandAmps(ts)) {
+                row.append(String.format(Locale.ROOT, " %8.2f", a / 1000));
             }
             out.println(row);
         }
     }
 
-    private void csv(List<CableThermalLimit> cables, List<String> labels, double[] ts) {
+    private void csv(WithstandTable table) {
+        double[] ts = table.timesSeconds();
         StringBuilder h = new StringBuilder("size,size_mm2,parallel,k,initial_c,final_c");
         for (double t : ts) {
-            h.append(",withstand_").append(Checks.format(t).replace('.', '_')).append("s_a");
+            h.append(",withstand_").append(Quantities.asGiven(t).replace('.', '_')).append("s_a");
         }
         out.println(h);
-        for (int i = 0; i < cables.size(); i++) {
-            CableThermalLimit c = cables.get(i);
-            StringBuilder row = new StringBuilder("\"" + labels.get(i) + "\"," + Checks.format(c.sizeMm2()) + ","
+        for (WithstandTable.Row r : table.rows()) {
+            CableThermalLimit c = r.cable();
+            StringBuilder row = new StringBuilder("\"" + r.label() + "\"," + Quantities.asGiven(c.sizeMm2()) + ","
                     + c.parallel() + "," + c.k() + "," + c.initialCelsius() + "," + c.finalCelsius());
-            for (double t : ts) {
-                row.append(',').append(c.withstandAmps(t));
+            for (double a : r.withstandAmps(ts)) {
+                row.append(',').append(a);
             }
             out.println(row);
         }
-    }
-
-    private void json(List<CableThermalLimit> cables, List<String> labels, double[] ts) {
-        List<Object> rows = new ArrayList<>();
-        for (int i = 0; i < cables.size(); i++) {
-            CableThermalLimit c = cables.get(i);
-            Map<String, Object> r = new LinkedHashMap<>();
-            r.put("size", labels.get(i));
-            r.put("size_mm2", c.sizeMm2());
-            r.put("parallel", c.parallel());
-            r.put("k", c.k());
-            r.put("initial_c", c.initialCelsius());
-            r.put("final_c", c.finalCelsius());
-            r.put("i2t_a2s", c.i2tA2s());
-            List<Object> w = new ArrayList<>();
-            for (double t : ts) {
-                Map<String, Object> e = new LinkedHashMap<>();
-                e.put("time_s", t);
-                e.put("withstand_a", c.withstandAmps(t));
-                w.add(e);
-            }
-            r.put("withstand", w);
-            rows.add(r);
-        }
-        Map<String, Object> top = new LinkedHashMap<>();
-        top.put("conductor", cables.get(0).material().key());
-        top.put("insulation", cables.get(0).insulation().key());
-        top.put("method", cables.get(0).method().key());
-        top.put("sizes", rows);
-        out.print(ReportJson.write(top));
     }
 }

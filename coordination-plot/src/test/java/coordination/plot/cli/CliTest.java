@@ -69,7 +69,7 @@ class CliTest {
         byte[] before = Files.readAllBytes(out.resolve("feeder.png"));
         Files.writeString(good, "format: 1\ntitle: [broken\n");
         assertThat(run("sheet", good.toString(), "-o", out.toString()).code(), is(ExitCodes.BAD_INPUT));
-        assertThat(java.util.Arrays.equals(before, Files.readAllBytes(out.resolve("feeder.png"))), is(true));
+        assertThat("feeder.png was changed by the failed run", java.util.Arrays.equals(before, Files.readAllBytes(out.resolve("feeder.png"))), is(true));
         assertThat(files(out), is(List.of("feeder.png", "feeder.report.json", "feeder.svg")));
     }
 
@@ -142,7 +142,7 @@ class CliTest {
         InProcess.Run r = run("sheet", study.toString(), "-o", out.toString());
         assertThat(r.code(), is(ExitCodes.BAD_INPUT));
         assertThat(r.err(), containsString("feeder.report.json is a folder or a link - it is not replaced"));
-        assertThat(java.util.Arrays.equals(svg, Files.readAllBytes(out.resolve("feeder.svg"))), is(true));
+        assertThat("feeder.svg was changed by the failed run", java.util.Arrays.equals(svg, Files.readAllBytes(out.resolve("feeder.svg"))), is(true));
         assertThat(files(out), is(List.of("feeder.png", "feeder.report.json", "feeder.svg")));
     }
 
@@ -168,7 +168,7 @@ class CliTest {
         assertThat(r.code(), is(ExitCodes.BAD_INPUT));
         assertThat(files(out), is(List.of("good.png", "good.report.json", "good.svg")));
         // the user's study files are never touched
-        assertThat(java.util.Arrays.equals(before, Files.readAllBytes(in.resolve("good.yaml"))), is(true));
+        assertThat("the study file good.yaml was changed", java.util.Arrays.equals(before, Files.readAllBytes(in.resolve("good.yaml"))), is(true));
     }
 
     @Test
@@ -189,6 +189,31 @@ class CliTest {
         assertThat(r.out(), containsString("TX1-HV-relay multiplier now 0.25, proposed 0.1063 (interval 0.3 s)"));
         InProcess.Run j = run("design", "--json", SAMPLES.resolve("05-blower-feeder-undersized.yaml").toString());
         assertThat(j.out(), containsString("\"next_iec_mm2\" : 35.0"));
+    }
+
+    /**
+     * The multiplier's kind and range come from the study, not from the curve's name: a custom
+     * curve with the IEEE C37.112 very-inverse constants set by time dial gets the same proposals
+     * as the named curve.
+     */
+    @Test
+    void designOfACustomCurveSetByTimeDialMatchesTheNamedIeeeCurve(@TempDir Path tmp) throws Exception {
+        String study = Files.readString(SAMPLES.resolve("05-blower-feeder-undersized.yaml"));
+        Path named = tmp.resolve("named.yaml");
+        Files.writeString(named, study.replace("{curve: iec-very-inverse, pickup_a: 160, tms: 0.3}",
+                "{curve: ieee-very-inverse, pickup_a: 160, time_dial: 5}"));
+        Path custom = tmp.resolve("custom.yaml");
+        // IEEE C37.112: very inverse, A = 19.61 s, B = 0.491 s, p = 2
+        Files.writeString(custom, study.replace("{curve: iec-very-inverse, pickup_a: 160, tms: 0.3}",
+                "{curve: custom, pickup_a: 160, a_s: 19.61, b_s: 0.491, p: 2, time_dial: 5}"));
+        InProcess.Run n = run("design", "--json", named.toString());
+        InProcess.Run c = run("design", "--json", custom.toString());
+        assertThat(n.code(), is(ExitCodes.PASS));
+        assertThat(c.out(), containsString("\"time_dial\" : {"));
+        assertEquals(n.out().replace("\"named\"", "\"study\"").replace("ieee-very-inverse", "curve"),
+                c.out().replace("\"stage\" : \"custom\"", "\"stage\" : \"curve\"").replace("\"custom\"", "\"study\""));
+        InProcess.Run text = run("design", custom.toString());
+        assertThat(text.out(), containsString("time_dial  now 5, largest"));
     }
 
     @Test
