@@ -20,7 +20,11 @@ import org.hamcrest.TypeSafeDiagnosingMatcher;
  * assertThat(feederRelay, protects(cable).between(1_500, 12_000).withMarginOfSeconds(0.1));
  * assertThat(feederRelay, gradesUnder(incomer).between(1_500, 12_000).withIntervalOfSeconds(0.3));
  * }</pre>
+ *
+ * <p>The matchers are Hamcrest matchers, so their signatures name Hamcrest types; the module reads
+ * Hamcrest only when it is present, as it is wherever the matchers are used (a test path).
  */
+@SuppressWarnings("exports")
 public final class CoordinationMatchers {
     private CoordinationMatchers() {
     }

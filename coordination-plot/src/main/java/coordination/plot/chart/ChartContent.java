@@ -52,12 +52,13 @@ public record ChartContent(String title, double referenceKv, List<ProtectiveDevi
         double hi = Double.NaN;
         for (Study.StudyCable c : study.cables()) {
             cables.add(c.limit());
-            if (!Double.isNaN(c.faultMinAmps())) {
-                lo = Double.isNaN(lo) ? c.faultMinAmps() : Math.min(lo, c.faultMinAmps());
-                hi = Double.isNaN(hi) ? c.faultMaxAmps() : Math.max(hi, c.faultMaxAmps());
+            if (c.fault().isPresent()) {
+                Study.CurrentRange f = c.fault().get();
+                lo = Double.isNaN(lo) ? f.fromAmps() : Math.min(lo, f.fromAmps());
+                hi = Double.isNaN(hi) ? f.toAmps() : Math.max(hi, f.toAmps());
             }
         }
-        return new ChartContent(study.title(), study.voltageKv(), devices, cables, lo, hi, report.cableResults(),
-                report.gradingResults());
+        return new ChartContent(study.title(), study.voltageKv(), devices, cables, lo, hi,
+                report.results(CableCheckResult.class), report.results(GradingCheckResult.class));
     }
 }

@@ -3,10 +3,10 @@ package coordination.plot.chart;
 import coordination.core.cable.CableThermalLimit;
 import coordination.core.curve.ProtectiveDevice;
 import coordination.core.curve.TimeCurrentCurve;
-import coordination.core.internal.Checks;
 import coordination.core.margin.CableCheckResult;
 import coordination.core.margin.GradingCheckResult;
 import coordination.core.margin.Side;
+import coordination.plot.Quantities;
 import java.awt.BasicStroke;
 import java.awt.Color;
 import java.awt.Font;
@@ -67,7 +67,7 @@ public final class TimeCurrentChart {
         this.yMin = timeMin(content, xMax);
         this.yMax = TIME_MAX;
         this.chart = new XYChartBuilder().width(width).height(height).title(content.title())
-                .xAxisTitle("Current (A) at " + Checks.format(content.referenceKv()) + " kV")
+                .xAxisTitle("Current (A) at " + Quantities.asGiven(content.referenceKv()) + " kV")
                 .yAxisTitle("Time (s)").build();
         style(width);
         draw();
@@ -446,7 +446,7 @@ public final class TimeCurrentChart {
                 continue;
             }
             chart.addAnnotation(new AnnotationLine(m[0], true, false));
-            String label = (m[1] == 0 ? "Ik min " : "Ik max ") + amps(m[0]) + " A";
+            String label = (m[1] == 0 ? "Ik min " : "Ik max ") + Quantities.current(m[0], 3);
             chart.addAnnotation(new AnnotationText(label, m[0], yMax / (m[1] == 0 ? 2.2 : 1.4), false));
         }
     }
@@ -479,7 +479,7 @@ public final class TimeCurrentChart {
                 p.setShowInLegend(false);
                 double labelY = Math.max(t / 2.2 * Math.pow(0.45, labels), yMin * 1.5);
                 labels++;
-                chart.addAnnotation(new AnnotationText("min margin " + Checks.format(round3(r.minMarginSeconds()))
+                chart.addAnnotation(new AnnotationText("min margin " + Quantities.significant(r.minMarginSeconds(), 3)
                         + " s" + (content.cableResults().size() > 1 ? " (" + r.cable() + ")" : ""), at, labelY, false));
             }
         }
@@ -504,17 +504,9 @@ public final class TimeCurrentChart {
             s.setMarker(SeriesMarkers.CROSS);
             s.setMarkerColor(Palette.FAIL);
             for (double[] p : crossing) {
-                chart.addAnnotation(new AnnotationText(amps(round3(p[0])) + " A", p[0] * 1.5, clipTime(p[1]) * 1.7,
+                chart.addAnnotation(new AnnotationText(Quantities.current(p[0], 3), p[0] * 1.5, clipTime(p[1]) * 1.7,
                         false));
             }
         }
-    }
-
-    private static double round3(double v) {
-        if (v == 0 || !Double.isFinite(v)) {
-            return v;
-        }
-        double scale = Math.pow(10, 2 - Math.floor(Math.log10(Math.abs(v))));
-        return Math.round(v * scale) / scale;
     }
 }

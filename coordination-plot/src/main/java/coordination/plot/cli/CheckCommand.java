@@ -1,17 +1,16 @@
 package coordination.plot.cli;
 
-import coordination.core.internal.Checks;
 import coordination.core.margin.CableCheckResult;
+import coordination.core.margin.CheckResult;
 import coordination.core.margin.GradingCheckResult;
 import coordination.core.study.Problem;
-import coordination.core.study.ReportJson;
+import coordination.core.study.ReportWriter;
 import coordination.core.study.StudyReport;
+import coordination.plot.Quantities;
 import java.io.PrintStream;
 import java.nio.file.Path;
 import java.util.ArrayList;
-import java.util.LinkedHashMap;
 import java.util.List;
-import java.util.Map;
 import java.util.concurrent.Callable;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Option;
@@ -64,17 +63,9 @@ final class CheckCommand implements Callable<Integer> {
         }
         if (json) {
             if (files.size() == 1 && reports.size() == 1) {
-                out.print(ReportJson.write(reports.get(0)));
+                out.print(ReportWriter.write(reports.get(0)));
             } else if (!reports.isEmpty() || !invalid) {
-                Map<String, Object> all = new LinkedHashMap<>();
-                all.put("format", StudyReport.FORMAT);
-                all.put("pass", !failed && !invalid);
-                List<Object> list = new ArrayList<>();
-                for (StudyReport r : reports) {
-                    list.add(r.toJson());
-                }
-                all.put("studies", list);
-                out.print(ReportJson.write(all));
+                out.print(ReportWriter.write(reports, !failed && !invalid));
             }
         } else {
             for (StudyReport r : reports) {
@@ -86,14 +77,14 @@ final class CheckCommand implements Callable<Integer> {
 
     private void table(StudyReport r) {
         out.println(r.study().name() + ": " + r.study().title() + " - " + (r.pass() ? "PASS" : "FAIL"));
-        for (Object o : r.order()) {
+        for (CheckResult o : r.results()) {
+            String verdict = "  " + (o.pass() ? "pass" : "FAIL");
             if (o instanceof CableCheckResult c) {
-                out.println("  " + (c.pass() ? "pass" : "FAIL") + "  cable    " + c.device() + " protects " + c.cable()
-                        + ": " + c.reason() + crossings(c.crossingsAmps()));
-            } else {
-                GradingCheckResult g = (GradingCheckResult) o;
-                out.println("  " + (g.pass() ? "pass" : "FAIL") + "  grading  " + g.downstream() + " under "
-                        + g.upstream() + ": " + g.reason() + crossings(g.crossingsAmps()));
+                out.println(verdict + "  cable    " + c.device() + " protects " + c.cable() + ": " + c.reason()
+                        + crossings(c.crossingsAmps()));
+            } else if (o instanceof GradingCheckResult g) {
+                out.println(verdict + "  grading  " + g.downstream() + " under " + g.upstream() + ": " + g.reason()
+                        + crossings(g.crossingsAmps()));
             }
         }
     }
@@ -104,7 +95,7 @@ final class CheckCommand implements Callable<Integer> {
         }
         List<String> s = new ArrayList<>();
         for (double a : amps) {
-            s.add(Checks.format(a));
+            s.add(Quantities.significant(a, 6));
         }
         return "; crossings at " + String.join(", ", s) + " A";
     }

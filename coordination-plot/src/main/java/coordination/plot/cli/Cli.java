@@ -11,7 +11,7 @@ import picocli.CommandLine.Command;
         description = "Checks that protective devices protect their cables and grade with each other,"
                 + " and draws coordination sheets.",
         subcommands = {SheetCommand.class, CheckCommand.class, WithstandCommand.class, DesignCommand.class},
-        exitCodeOnInvalidInput = ExitCodes.BAD_INPUT, exitCodeOnExecutionException = ExitCodes.BAD_INPUT)
+        exitCodeOnInvalidInput = ExitCodes.BAD_INPUT, exitCodeOnExecutionException = ExitCodes.INTERNAL_ERROR)
 public final class Cli implements Runnable {
     private final PrintStream out;
     private final PrintStream err;
@@ -57,7 +57,7 @@ public final class Cli implements Runnable {
             if (System.getenv("COORDINATION_DEBUG") != null) {
                 ex.printStackTrace(err);
             }
-            return ExitCodes.BAD_INPUT;
+            return ExitCodes.INTERNAL_ERROR;
         });
         return cl.execute(args);
     }

@@ -8,6 +8,8 @@ public final class ExitCodes {
     public static final int CHECK_FAILED = 1;
     /** Bad input or usage: a study file with problems, an unknown option, an unreadable folder. */
     public static final int BAD_INPUT = 2;
+    /** A defect of the tool itself, not of the input: report it with the study that shows it. */
+    public static final int INTERNAL_ERROR = 3;
 
     private ExitCodes() {
     }

@@ -1,11 +1,12 @@
 package coordination.plot.sheet;
 
 import coordination.core.cable.CableThermalLimit;
-import coordination.core.internal.Checks;
 import coordination.core.margin.CableCheckResult;
+import coordination.core.margin.CheckResult;
 import coordination.core.margin.GradingCheckResult;
 import coordination.core.study.Study;
 import coordination.core.study.StudyReport;
+import coordination.plot.Quantities;
 import coordination.plot.chart.ChartContent;
 import coordination.plot.chart.Palette;
 import coordination.plot.chart.TimeCurrentChart;
@@ -91,7 +92,7 @@ public final class CoordinationSheet {
         double top = titleBlock(g);
         double footerTop = height - MARGIN - 22;
         double chartW = Math.round((width - 2 * MARGIN) * 0.58);
-        double resultsH = Math.min(130, 28 + 11 * Math.max(1, report.order().size()));
+        double resultsH = Math.min(130, 28 + 11 * Math.max(1, report.results().size()));
         double chartBottom = footerTop - resultsH - 6;
         double chartH = chartBottom - top - 4;
         chart(g, MARGIN, top + 4, chartW, chartH);
@@ -111,8 +112,8 @@ public final class CoordinationSheet {
         text(g, fit(g, study.title(), width - 2 * MARGIN - 150), x, y + 12);
         g.setFont(Palette.font(Font.PLAIN, 8f));
         List<String> facts = new ArrayList<>();
-        facts.add("reference " + Checks.format(study.voltageKv()) + " kV");
-        facts.add(Checks.format(study.frequencyHz()) + " Hz");
+        facts.add("reference " + Quantities.asGiven(study.voltageKv()) + " kV");
+        facts.add(Quantities.asGiven(study.frequencyHz()) + " Hz");
         if (!study.revision().isEmpty()) {
             facts.add("revision " + study.revision());
         }
@@ -124,7 +125,7 @@ public final class CoordinationSheet {
         // verdict box, worded as well as coloured
         boolean pass = report.pass();
         int fails = report.failures();
-        int n = report.order().size();
+        int n = report.results().size();
         String verdict = n == 0 ? "NO CHECKS" : pass ? (n == 1 ? "THE CHECK PASSES" : "ALL " + n + " CHECKS PASS")
                 : fails + " OF " + n + (n == 1 ? " CHECK FAILS" : " CHECKS FAIL");
         g.setFont(Palette.font(Font.BOLD, 10f));
@@ -178,7 +179,7 @@ public final class CoordinationSheet {
         for (Study.StudyDevice d : study.devices()) {
             List<String> lines = new ArrayList<>();
             lines.add(d.id() + " (" + d.device().kind().key() + ")");
-            lines.addAll(d.settings());
+            lines.addAll(SettingsText.lines(d));
             if (cy + 9 * lines.size() > bottom) {
                 break;
             }
@@ -215,12 +216,13 @@ public final class CoordinationSheet {
                 l.id(),
                 l.material().key() + ", " + l.insulation().key() + ", " + (l.parallel() > 1 ? l.parallel() + " x " : "")
                     + c.sizeText() + ", " + l.method().key(),
-                "k " + String.format(java.util.Locale.ROOT, "%.1f", l.k()) + ", " + Checks.format(round(l.initialCelsius(), 1)) + " °C to "
-                    + Checks.format(l.finalCelsius()) + " °C, I²t " + engineering(l.i2tA2s()) + "A²s",
+                "k " + String.format(java.util.Locale.ROOT, "%.1f", l.k()) + ", "
+                    + Quantities.significant(l.initialCelsius(), 1) + " °C to "
+                    + Quantities.asGiven(l.finalCelsius()) + " °C, I²t " + engineering(l.i2tA2s()) + "A²s",
                 "withstand " + kiloamps(l.withstandAmps(0.1)) + " / " + kiloamps(l.withstandAmps(1.0)) + " / "
                     + kiloamps(l.withstandAmps(5.0)) + " kA at 0.1 / 1 / 5 s",
-                Double.isNaN(c.faultMinAmps()) ? "" : "fault range " + kiloamps(c.faultMinAmps()) + " to "
-                    + kiloamps(c.faultMaxAmps()) + " kA",
+                c.fault().map(f -> "fault range " + kiloamps(f.fromAmps()) + " to " + kiloamps(f.toAmps()) + " kA")
+                    .orElse(""),
             };
             if (cy + 9 * lines.length > bottom) {
                 break;
@@ -255,30 +257,12 @@ public final class CoordinationSheet {
         }
         cy += 10;
         int shown = 0;
-        for (Object o : report.order()) {
+        for (CheckResult o : report.results()) {
             if (cy + 10 > bottom) {
                 break;
             }
-            String[] cells;
-            boolean pass;
-            if (o instanceof CableCheckResult r) {
-                pass = r.pass();
-                cells = new String[] {r.device() + " protects " + r.cable(),
-                    Double.isNaN(r.undefinedFromAmps()) && Double.isNaN(r.notClearedFromAmps())
-                        && Double.isFinite(r.minMarginSeconds())
-                        ? seconds(r.minMarginSeconds()) + " s (ratio " + Checks.format(round(r.minRatio(), 3)) + ")"
-                        : r.reason(),
-                    Double.isFinite(r.minMarginSeconds()) ? kiloamps(r.minMarginAtAmps()) + " kA" : "",
-                    crossings(r.crossingsAmps()), r.requirement().toString(), pass ? "pass" : "FAIL"};
-            } else {
-                GradingCheckResult r = (GradingCheckResult) o;
-                pass = r.pass();
-                cells = new String[] {r.downstream() + " grades under " + r.upstream(),
-                    Double.isFinite(r.minIntervalSeconds()) ? seconds(r.minIntervalSeconds()) + " s"
-                        : r.reason(),
-                    Double.isFinite(r.minIntervalSeconds()) ? kiloamps(r.minIntervalAtAmps()) + " kA" : "",
-                    crossings(r.crossingsAmps()), r.requirement().toString(), pass ? "pass" : "FAIL"};
-            }
+            String[] cells = cells(o);
+            boolean pass = o.pass();
             g.setFont(Palette.font(Font.PLAIN, 7f));
             for (int i = 0; i < cells.length; i++) {
                 g.setColor(i == cells.length - 1 ? (pass ? Palette.PASS : Palette.FAIL) : Color.BLACK);
@@ -291,10 +275,30 @@ public final class CoordinationSheet {
             cy += 10;
             shown++;
         }
-        if (shown < report.order().size()) {
+        if (shown < report.results().size()) {
             g.setColor(Color.BLACK);
-            text(g, "+ " + (report.order().size() - shown) + " more checks in the report", x, cy + 7.5);
+            text(g, "+ " + (report.results().size() - shown) + " more checks in the report", x, cy + 7.5);
         }
+    }
+
+    private static String[] cells(CheckResult o) {
+        String verdict = o.pass() ? "pass" : "FAIL";
+        if (o instanceof CableCheckResult r) {
+            return new String[] {r.device() + " protects " + r.cable(),
+                Double.isNaN(r.undefinedFromAmps()) && Double.isNaN(r.notClearedFromAmps())
+                    && Double.isFinite(r.minMarginSeconds())
+                    ? seconds(r.minMarginSeconds()) + " s (ratio " + Quantities.significant(r.minRatio(), 3) + ")"
+                    : r.reason(),
+                Double.isFinite(r.minMarginSeconds()) ? kiloamps(r.minMarginAtAmps()) + " kA" : "",
+                crossings(r.crossingsAmps()), r.requirement().toString(), verdict};
+        }
+        if (o instanceof GradingCheckResult r) {
+            return new String[] {r.downstream() + " grades under " + r.upstream(),
+                Double.isFinite(r.minIntervalSeconds()) ? seconds(r.minIntervalSeconds()) + " s" : r.reason(),
+                Double.isFinite(r.minIntervalSeconds()) ? kiloamps(r.minIntervalAtAmps()) + " kA" : "",
+                crossings(r.crossingsAmps()), r.requirement().toString(), verdict};
+        }
+        throw new IllegalStateException("no table row for a result of kind " + o.getClass().getSimpleName());
     }
 
     private void footer(Graphics2D g, double y) {
@@ -323,25 +327,16 @@ public final class CoordinationSheet {
     }
 
     private static String seconds(double s) {
-        return Checks.format(round(s, 3));
+        return Quantities.significant(s, 3);
     }
 
     private static String kiloamps(double amps) {
-        return Checks.format(round(amps / 1000, 3));
+        return Quantities.kiloamps(amps, 3);
     }
 
     private static String engineering(double v) {
         double e = Math.floor(Math.log10(v));
-        return Checks.format(round(v / Math.pow(10, e), 3)) + "e" + (int) e + " ";
-    }
-
-    /** Rounds to significant digits. */
-    private static double round(double v, int digits) {
-        if (v == 0 || !Double.isFinite(v)) {
-            return v;
-        }
-        double scale = Math.pow(10, digits - 1 - Math.floor(Math.log10(Math.abs(v))));
-        return Math.round(v * scale) / scale;
+        return Quantities.significant(v / Math.pow(10, e), 3) + "e" + (int) e + " ";
     }
 
     private static void text(Graphics2D g, String s, double x, double y) {

@@ -1,6 +1,6 @@
 package coordination.plot.sheet;
 
-import coordination.core.study.ReportJson;
+import coordination.core.study.ReportWriter;
 import coordination.core.study.Study;
 import coordination.core.study.StudyReport;
 import java.io.IOException;
@@ -66,7 +66,7 @@ public final class SheetWriter {
                 files.put(base + "." + f.extension(), sheet.render(f, dpi));
             }
         }
-        files.put(base + ".report.json", ReportJson.write(report).getBytes(StandardCharsets.UTF_8));
+        files.put(base + ".report.json", ReportWriter.write(report).getBytes(StandardCharsets.UTF_8));
         return files;
     }
 
