@@ -2,6 +2,7 @@ package coordination.samples;
 
 import static org.hamcrest.MatcherAssert.assertThat;
 import static org.hamcrest.Matchers.empty;
+import static org.hamcrest.Matchers.is;
 import static org.hamcrest.Matchers.not;
 
 import com.fasterxml.jackson.databind.JsonNode;
@@ -69,6 +70,55 @@ class SchemaTest {
     void reportSchemaAcceptsEveryExpectedReport(Path file) throws Exception {
         Set<ValidationMessage> errors = schema("report.schema.json").validate(new ObjectMapper().readTree(file.toFile()));
         assertThat(file + ": " + errors, errors, empty());
+    }
+
+    /**
+     * Invalid cases of the corpus that the study schema accepts, each with the reason no JSON
+     * Schema can refuse it: the rule is about YAML itself, relates two values, or needs a model.
+     */
+    static final java.util.Map<String, String> SCHEMA_CANNOT_TELL = java.util.Map.ofEntries(
+            java.util.Map.entry("breaker-band-inverted", "relates two values: the band's high edge to its low edge"),
+            java.util.Map.entry("breaker-isd-below-ir", "relates two values: Isd must lie above Ir"),
+            java.util.Map.entry("cable-duplicate-id", "ids unique by one key across the list"),
+            java.util.Map.entry("cable-fault-inverted", "relates two values: max at or above min"),
+            java.util.Map.entry("cable-initial-above-final", "relates two temperatures, one of them a default"),
+            java.util.Map.entry("check-no-range", "the default range comes from the cable the check names"),
+            java.util.Map.entry("check-unknown-cable", "a reference to another part of the document"),
+            java.util.Map.entry("check-unknown-device", "a reference to another part of the document"),
+            java.util.Map.entry("duplicate-key", "the YAML parser keeps one of the two keys before any schema sees them"),
+            java.util.Map.entry("empty-file", "there is no document to validate"),
+            java.util.Map.entry("fuse-clearing-below-melting", "compares two curves point by point"),
+            java.util.Map.entry("fuse-rising-curve", "an order between list items"),
+            java.util.Map.entry("grading-ratio-on-relays", "depends on the kinds of the devices the check names"),
+            java.util.Map.entry("relay-multiplier-outside-range", "relates a setting to its stated range"),
+            java.util.Map.entry("syntax-error", "not YAML"),
+            java.util.Map.entry("two-documents", "a stream of two documents; a schema sees only the first"));
+
+    static Stream<Path> invalidStudies() throws Exception {
+        try (Stream<Path> corpus = Files.list(Path.of("../spec/cases/invalid"))) {
+            return corpus.filter(p -> p.toString().endsWith(".yaml")).sorted().toList().stream();
+        }
+    }
+
+    @ParameterizedTest
+    @MethodSource("invalidStudies")
+    void studySchemaRefusesEveryInvalidCaseItCanExpress(Path file) throws Exception {
+        String name = file.getFileName().toString().replace(".yaml", "");
+        JsonNode study;
+        try {
+            study = new YAMLMapper().readTree(file.toFile());
+        } catch (java.io.IOException e) {
+            // not YAML at all: nothing for a schema to judge
+            assertThat(name + " does not parse, so it must be listed", SCHEMA_CANNOT_TELL.containsKey(name), is(true));
+            return;
+        }
+        Set<ValidationMessage> errors = study == null || study.isMissingNode() ? Set.of()
+                : schema("study.schema.json").validate(study);
+        if (SCHEMA_CANNOT_TELL.containsKey(name)) {
+            assertThat(name + " is listed as beyond the schema but the schema refuses it: " + errors, errors, empty());
+        } else {
+            assertThat(name + ": the schema accepts it", errors, not(empty()));
+        }
     }
 
     @Test

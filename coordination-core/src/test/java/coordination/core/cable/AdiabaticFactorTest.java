@@ -1,5 +1,6 @@
 package coordination.core.cable;
 
+import static org.hamcrest.Matchers.nullValue;
 import static org.hamcrest.MatcherAssert.assertThat;
 import static org.hamcrest.Matchers.closeTo;
 import static org.hamcrest.Matchers.is;
@@ -83,6 +84,6 @@ class AdiabaticFactorTest {
 
     @Test
     void unknownInsulationIsNotFound() {
-        assertThat(Insulation.byKey("cotton") == null, is(true));
+        assertThat(Insulation.byKey("cotton"), nullValue());
     }
 }

@@ -74,8 +74,8 @@ class DevicesTest {
     void tripUnitLongTimeTrIsTheTimeAtSixTimesIr() {
         TripUnitBreaker b = new TripUnitBreaker("Q1", new TripUnitBreaker.Settings(400, 10, 2400, 0.2, false, 6000,
                 0.01, 0.05, 1.05, 1.30, 0.0, 0.0));
-        assertThat(b.maximumCurve().seconds(2400 * 0.999), closeTo(10 * 2400.0 * 2400 / (2398.0 * 2398) * 0.999 * 0
-                + 10 * Math.pow(2400 / (2400 * 0.999), 2), 1e-9));
+        // constant I²t through (6 Ir, tr) with no tolerance: t = tr (6 Ir / I)²
+        assertThat(b.maximumCurve().seconds(2400 * 0.999), closeTo(10 * Math.pow(2400 / (2400 * 0.999), 2), 1e-9));
         assertThat(b.maximumCurve().seconds(3000), closeTo(0.2, 1e-15));
         assertThat(b.maximumCurve().seconds(6000), closeTo(0.05, 1e-15));
         assertThat(b.minimumCurve().seconds(6000), closeTo(0.01, 1e-15));

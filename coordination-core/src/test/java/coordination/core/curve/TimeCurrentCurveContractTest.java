@@ -1,5 +1,6 @@
 package coordination.core.curve;
 
+import static org.junit.jupiter.api.Assertions.assertThrows;
 import static org.hamcrest.MatcherAssert.assertThat;
 import static org.hamcrest.Matchers.greaterThanOrEqualTo;
 import static org.hamcrest.Matchers.is;
@@ -51,6 +52,9 @@ abstract class TimeCurrentCurveContractTest {
             double below = lowestOperatingAmps(d) * 0.999;
             if (curve.isDefinedAt(below)) {
                 assertThat(curve + " at " + below + " A", curve.seconds(below), is(Double.POSITIVE_INFINITY));
+            } else {
+                // a digitised curve says it has no value there rather than make one up
+                assertThrows(CurveDomainException.class, () -> curve.seconds(below), curve + " at " + below + " A");
             }
         }
     }

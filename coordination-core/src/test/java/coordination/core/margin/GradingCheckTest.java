@@ -28,7 +28,7 @@ class GradingCheckTest {
         double expected = 0.2 * 0.14 / (Math.pow(20, 0.02) - 1);
         assertThat(r.minIntervalSeconds(), closeTo(expected, 1e-12));
         assertThat(r.minIntervalAtAmps(), is(8000.0));
-        assertThat(r.pass(), is(true));
+        assertThat(r.toString(), r.pass(), is(true));
     }
 
     @Test
@@ -39,7 +39,7 @@ class GradingCheckTest {
         GradingCheckResult r = GradingCheck.check(up, down, 1500, 6000, GradingRequirement.intervalSeconds(0.3));
         assertThat(r.crossingsAmps().length, is(1));
         assertThat(r.crossingsAmps()[0], closeTo(200 * (1 + 6.75 / 0.4), 1e-6));
-        assertThat(r.pass(), is(false));
+        assertThat(r.toString(), r.pass(), is(false));
         assertThat(r.minIntervalSeconds(), closeTo(0.4 - 6.75 / (1500 / 200.0 - 1), 1e-12));
     }
 
@@ -48,7 +48,7 @@ class GradingCheckTest {
         Relay up = Relay.of("U", DefiniteTimeStage.definiteTime(500, 0.6));
         Relay down = Relay.of("D", DefiniteTimeStage.definiteTime(1000, 0.1));
         GradingCheckResult r = GradingCheck.check(up, down, 600, 5000, GradingRequirement.intervalSeconds(0.3));
-        assertThat(r.pass(), is(false));
+        assertThat(r.toString(), r.pass(), is(false));
         assertEquals("'U' operates where 'D' does not or slows without bound, at 600 A", r.reason());
     }
 
@@ -60,8 +60,8 @@ class GradingCheckTest {
                 new TabulatedCurve("c", new double[] {200, 3000}, new double[] {600, 0.02}), OptionalDouble.empty());
         GradingCheckResult r = GradingCheck.check(up, down, 400, 2500, GradingRequirement.ratingRatio(1.6));
         assertThat(r.ratingRatio(), closeTo(1.6, 1e-15));
-        assertThat(r.pass(), is(true));
+        assertThat(r.toString(), r.pass(), is(true));
         GradingCheckResult strict = GradingCheck.check(up, down, 400, 2500, GradingRequirement.ratingRatio(2));
-        assertThat(strict.pass(), is(false));
+        assertThat(strict.toString(), strict.pass(), is(false));
     }
 }

@@ -1,5 +1,6 @@
 package coordination.plot.chart;
 
+import static org.hamcrest.Matchers.closeTo;
 import static org.hamcrest.MatcherAssert.assertThat;
 import static org.hamcrest.Matchers.hasItems;
 import static org.hamcrest.Matchers.is;
@@ -38,8 +39,8 @@ class TimeCurrentChartTest {
         assertThat(c.currentAxis()[1], is(100_000.0));
         assertThat(c.timeAxis()[0], is(0.01));
         assertThat(c.timeAxis()[1], is(1000.0));
-        assertThat(c.chart().getStyler().isXAxisLogarithmic(), is(true));
-        assertThat(c.chart().getStyler().isYAxisLogarithmic(), is(true));
+        assertThat("current axis logarithmic", c.chart().getStyler().isXAxisLogarithmic(), is(true));
+        assertThat("time axis logarithmic", c.chart().getStyler().isYAxisLogarithmic(), is(true));
         assertThat(c.chart().getXAxisTitle(), is("Current (A) at 0.4 kV"));
     }
 
@@ -62,15 +63,16 @@ class TimeCurrentChartTest {
                 step = true;
             }
         }
-        assertThat(step, is(true));
+        assertThat("no vertical step at 3000 A from above 0.5 s to 0.15 s in " + java.util.Arrays.toString(x),
+                step, is(true));
     }
 
     @Test
     void cableLimitInsideTheWindowRunsFromFiveSecondsToATenth() {
         XYSeries s = c().getSeries("C damage limit");
         double[] y = s.getYData();
-        assertThat(Math.abs(y[0] - 5.0) < 1e-9, is(true));
-        assertThat(Math.abs(y[y.length - 1] - 0.1) < 1e-9, is(true));
+        assertThat(y[0], closeTo(5.0, 1e-9));
+        assertThat(y[y.length - 1], closeTo(0.1, 1e-9));
     }
 
     @Test

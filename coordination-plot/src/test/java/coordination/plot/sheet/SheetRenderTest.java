@@ -93,7 +93,7 @@ class SheetRenderTest {
                 fs.add(pool.submit(() -> sheet(file).render(OutputFormat.PNG, 150)));
             }
             for (Future<byte[]> f : fs) {
-                assertThat(Arrays.equals(reference, f.get()), is(true));
+                assertThat("bytes of one render thread differ from the first render", Arrays.equals(reference, f.get()), is(true));
             }
         } finally {
             pool.shutdownNow();
