@@ -15,7 +15,7 @@ voltage_kv: {kv}
 """
 
 def write(folder, name, text):
-    with open(os.path.join(folder, name + ".yaml"), "w") as f:
+    with open(os.path.join(folder, name + ".yaml"), "w", encoding="utf-8", newline="\n") as f:
         f.write(text)
 
 RELAY = """  - id: R1
@@ -121,6 +121,10 @@ valid["relay-custom-time-dial"] = (HEAD.format(title="Custom curve set by time d
     + "      - {curve: custom, pickup_a: 300, a_s: 19.61, b_s: 0.491, p: 2, time_dial: 5, time_dial_range: [0.5, 15]}\n"
     + "      - {curve: definite-time, pickup_a: 3000, delay_s: 0.1}\n"
     + "checks:\n  - {cable: C1, device: R1, margin_s: 0.1}\n")
+valid["cable-awg-zeros"] = (HEAD.format(title="AWG sizes written with zeros", kv=0.48)
+    + "cables:\n  - {id: C1, conductor: copper, insulation: xlpe, size: \"00 AWG\", fault_ka: {min: 2, max: 15}}\n"
+    + "  - {id: C2, conductor: copper, insulation: xlpe, size: \"0000 AWG\", fault_ka: {min: 2, max: 15}}\n"
+    + "devices:\n" + RELAY + "checks:\n  - {cable: C1, device: R1}\n  - {cable: C2, device: R1}\n")
 valid["empty-checks"] = HEAD.format(title="A study with nothing to check yet", kv=11) + "devices:\n" + RELAY
 
 BASE_LINES = BASE
@@ -195,6 +199,37 @@ invalid = {
     "two-documents": BASE + "---\nformat: 1\n",
     "lists-where-maps-belong": BASE.replace("fault_ka: {min: 1.5, max: 12}", "fault_ka: [1.5, 12]"),
 }
+
+# Hostile inputs: kept apart from the valid cases, so they are no seeds of the fuzz test.
+BREAKER = HEAD.format(title="Trip unit", kv=0.4) + "cables:\n" + CABLE + "devices:\n" + \
+    "  - {id: Q1, type: breaker, ir_a: 250, tr_s: 10, isd_a: 2500, tsd_s: 0.4, tsd_i2t: true}\n" + \
+    "checks:\n  - {cable: C1, device: Q1}\n"
+hostile = {
+    "boolean-yes": BREAKER.replace("tsd_i2t: true", "tsd_i2t: yes"),
+    "boolean-on": BASE.replace("checks:\n", "  - id: R0\n    type: relay\n    stages:\n      - {curve: iec-very-inverse, pickup_a: 600, tms: 0.4}\nchecks:\n")
+        + "  - {upstream: R0, downstream: R1, no_overlap: on, range_ka: {min: 1.5, max: 12}}\n",
+    "octal-pickup": BASE.replace("pickup_a: 250", "pickup_a: 0250"),
+    "hex-format": BASE.replace("format: 1", "format: 0x1"),
+    "underscore-number": BASE.replace("pickup_a: 3000", "pickup_a: 3_000"),
+    "tag-on-title": BASE.replace("title: Conformance base", "title: !!int 5"),
+    "kcmil-huge": BASE.replace("size_mm2: 70", "size: \"99999999999999999999 kcmil\""),
+    "many-problems": BASE + "".join("unknown_%d: 1\n" % i for i in range(150)),
+    "long-unknown-references": HEAD.format(title="Long references", kv=0.4) + "cables:\n"
+        + "".join("  - {id: C%d, conductor: copper, insulation: xlpe, size_mm2: 70, fault_ka: {min: 1.5, max: 12}}\n" % i
+                  for i in range(30))
+        + "devices:\n" + RELAY + "checks:\n"
+        + "".join("  - {cable: %s, device: R1}\n" % ("C" + "x" * 480 + str(i)) for i in range(3)),
+    "control-character-escaped": BASE.replace("title: Conformance base", "title: \"bell\\u0007 and clear \\e[2J\""),
+    "control-character-raw": BASE.replace("title: Conformance base", "title: raw \x01 byte"),
+    "key-with-line-break": BASE.replace("    size_mm2: 70\n", "    size_mm2: 70\n    \"forged\\nstudy.yaml:1:1: key\": 1\n"),
+    "bidi-override": BASE.replace("title: Conformance base", "title: \"Feeder \u202egnol\""),
+    "lone-surrogate": BASE.replace("title: Conformance base", "title: \"half \\ud800 pair\""),
+    "long-date": BASE.replace("voltage_kv: 0.4", "voltage_kv: 0.4\ndate: \"" + "9" * 600 + "\""),
+    "long-number": BASE.replace("pickup_a: 250", "pickup_a: 1" + "0" * 1200),
+    "long-id": BASE.replace("id: C1", "id: C" + "1" * 40).replace("cable: C1", "cable: C" + "1" * 40),
+}
+for name, text in hostile.items():
+    invalid["hostile-" + name] = text
 
 for d in ("valid", "invalid"):
     for f in os.listdir(d):

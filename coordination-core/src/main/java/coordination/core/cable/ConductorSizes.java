@@ -1,6 +1,7 @@
 package coordination.core.cable;
 
 import coordination.core.CoordinationException;
+import coordination.core.internal.Checks;
 import java.util.Locale;
 import java.util.regex.Matcher;
 import java.util.regex.Pattern;
@@ -27,7 +28,7 @@ public final class ConductorSizes {
     private static final double[] KCMIL_SIZES = {250, 300, 350, 400, 500, 600, 700, 750, 800, 900, 1000, 1250, 1500,
         1750, 2000};
 
-    private static final Pattern AWG = Pattern.compile("(?i)\\s*(\\d{1,2}|[1-4]/0)\\s*awg\\s*");
+    private static final Pattern AWG = Pattern.compile("(?i)\\s*(0{1,4}|\\d{1,2}|[1-4]/0)\\s*awg\\s*");
     private static final Pattern KCMIL = Pattern.compile("(?i)\\s*(\\d+(?:\\.\\d+)?)\\s*(kcmil|mcm)\\s*");
 
     private ConductorSizes() {
@@ -35,16 +36,22 @@ public final class ConductorSizes {
 
     /**
      * Cross-section of an AWG size, from ASTM B258: {@code d = 0.005 in × 92^((36 - n) / 39)} with
-     * 1/0 = 0, 2/0 = -1, 3/0 = -2, 4/0 = -3.
+     * 1/0 = 0, 2/0 = -1, 3/0 = -2, 4/0 = -3. The sizes above 1 are also written with zeros: 0 is
+     * 1/0, 00 is 2/0, 000 is 3/0 and 0000 is 4/0.
      *
-     * @param gauge AWG number as text: {@code "10"} or {@code "4/0"}
+     * @param gauge AWG number as text: {@code "10"}, {@code "4/0"} or {@code "00"}
      * @return area in mm²
      * @throws IllegalArgumentException if the gauge is not from 40 to 4/0
      */
     public static double awgMm2(String gauge) {
+        if (gauge == null || !gauge.matches("0{1,4}|\\d{1,2}|\\d/0")) {
+            throw new IllegalArgumentException("AWG size: found " + gauge + " - must be from 40 to 4/0");
+        }
         int n;
         if (gauge.endsWith("/0")) {
             n = 1 - Integer.parseInt(gauge.substring(0, gauge.length() - 2));
+        } else if (gauge.matches("0+")) {
+            n = 1 - gauge.length();
         } else {
             n = Integer.parseInt(gauge);
         }
@@ -62,6 +69,7 @@ public final class ConductorSizes {
      * @return area in mm²
      */
     public static double kcmilMm2(double kcmil) {
+        Checks.positive("kcmil size", kcmil, "kcmil");
         return kcmil * 1000.0 * MM2_PER_CMIL;
     }
 
@@ -105,6 +113,7 @@ public final class ConductorSizes {
      * @return the nominal size in mm², or NaN above the largest (2500 mm²)
      */
     public static double nextIecSizeMm2(double mm2) {
+        Checks.positive("conductor area", mm2, "mm2");
         for (double s : IEC_60228_MM2) {
             if (s >= mm2 * (1 - 1e-12)) {
                 return s;
@@ -121,6 +130,7 @@ public final class ConductorSizes {
      * @return the size's name, or null above 2000 kcmil
      */
     public static String nextAwgOrKcmil(double mm2) {
+        Checks.positive("conductor area", mm2, "mm2");
         for (String g : AWG_NAMES) {
             if (awgMm2(g) >= mm2 * (1 - 1e-12)) {
                 return g + " AWG";

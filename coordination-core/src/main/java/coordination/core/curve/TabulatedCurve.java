@@ -25,7 +25,9 @@ public final class TabulatedCurve implements TimeCurrentCurve {
      * @throws IllegalArgumentException naming the offending points if the rules are broken
      */
     public TabulatedCurve(String label, double[] amps, double[] seconds) {
-        this.label = label;
+        this.label = Checks.given("digitised curve: label", label);
+        Checks.given(label + ": currents", amps);
+        Checks.given(label + ": times", seconds);
         String problem = problem(label, amps, seconds);
         if (problem != null) {
             throw new IllegalArgumentException(problem);
@@ -67,6 +69,10 @@ public final class TabulatedCurve implements TimeCurrentCurve {
         if (!(amps[i] > amps[i - 1])) {
             return label + ": current falls from " + Checks.format(amps[i - 1]) + " A to " + Checks.format(amps[i])
                     + " A at points " + i + " and " + (i + 1) + "; currents must rise from point to point";
+        }
+        if (seconds[i] == seconds[i - 1]) {
+            return label + ": time stays at " + Checks.format(seconds[i]) + " s from " + Checks.format(amps[i - 1])
+                    + " A to " + Checks.format(amps[i]) + " A; times must fall as current rises";
         }
         return label + ": time rises from " + Checks.format(seconds[i - 1]) + " s at " + Checks.format(amps[i - 1])
                 + " A to " + Checks.format(seconds[i]) + " s at " + Checks.format(amps[i])

@@ -20,12 +20,24 @@ import java.util.function.Function;
 final class Binder {
     /** Longest text value accepted: titles and ids are short. */
     static final int MAX_TEXT = 500;
+    /** Longest id accepted: what a sheet's legend and tables can show in full. */
+    static final int MAX_ID = 40;
+    /** Longest words compared for a suggestion: the edit distance costs the product of the lengths. */
+    private static final int MAX_SUGGESTED = 64;
+    /** How many known ids a message lists. */
+    private static final int KNOWN_SHOWN = 5;
+    /**
+     * A number as a person writes it in decimal. YAML 1.1 also reads 0250 as octal, 0x1F as hex,
+     * 1_000 and 1:30 (base 60); none of those is accepted.
+     */
+    private static final java.util.regex.Pattern DECIMAL = java.util.regex.Pattern.compile(
+            "[-+]?(0|[1-9][0-9]*)(\\.[0-9]*)?([eE][-+]?[0-9]+)?|[-+]?\\.[0-9]+([eE][-+]?[0-9]+)?");
+    private static final java.util.regex.Pattern YAML_INFINITY_OR_NAN = java.util.regex.Pattern.compile(
+            "[-+]?\\.(inf|Inf|INF)|\\.(nan|NaN|NAN)");
 
-    private final String file;
-    private final List<Problem> problems;
+    private final Problems problems;
 
-    Binder(String file, List<Problem> problems) {
-        this.file = file;
+    Binder(Problems problems) {
         this.problems = problems;
     }
 
@@ -94,15 +106,15 @@ final class Binder {
     }
 
     int problemCount() {
-        return problems.size();
+        return problems.count();
     }
 
     void problem(Node at, String path, String message) {
-        problems.add(new Problem(file, at == null ? 1 : at.line(), at == null ? 1 : at.column(), path, message));
+        problems.add(at == null ? 1 : at.line(), at == null ? 1 : at.column(), path, message);
     }
 
     void problemAtKey(Node.Entry key, String path, String message) {
-        problems.add(new Problem(file, key.line(), key.column(), path, message));
+        problems.add(key.line(), key.column(), path, message);
     }
 
     static String join(String path, String key) {
@@ -147,15 +159,53 @@ final class Binder {
     static String suggestion(String given, List<String> candidates) {
         String best = null;
         int bestDistance = Integer.MAX_VALUE;
+        int limit = Math.max(2, given.length() / 3);
         for (String c : candidates) {
-            int d = c.equalsIgnoreCase(given) ? 0
-                    : c.startsWith(given + "_") || given.startsWith(c + "_") ? 1 : distance(given, c);
+            int d = closeness(given, c, limit);
             if (d < bestDistance) {
                 bestDistance = d;
                 best = c;
             }
         }
-        return best != null && bestDistance <= Math.max(2, given.length() / 3) ? best : null;
+        return best != null && bestDistance <= limit ? best : null;
+    }
+
+    /**
+     * How far a word is from a candidate: 0 for the same word in another case, 1 for a prefix
+     * before an underscore, else the edit distance; beyond {@code limit}, or for words too long to
+     * compare cheaply, {@code Integer.MAX_VALUE}.
+     */
+    static int closeness(String given, String c, int limit) {
+        if (c.equalsIgnoreCase(given)) {
+            return 0;
+        }
+        if (c.startsWith(given + "_") || given.startsWith(c + "_")) {
+            return 1;
+        }
+        if (Math.abs(c.length() - given.length()) > limit || c.length() > MAX_SUGGESTED
+                || given.length() > MAX_SUGGESTED) {
+            return Integer.MAX_VALUE;
+        }
+        return distance(given, c);
+    }
+
+    /** Longest piece of a user's value echoed in a message. */
+    private static final int ECHOED = 60;
+
+    /** A value as a message echoes it: cut after {@link #ECHOED} characters. */
+    static String echo(String value) {
+        return value.length() <= ECHOED ? value : value.substring(0, ECHOED - 3) + "... (" + value.length()
+                + " characters)";
+    }
+
+    /** The known words nearest to a given one, at most a few, with how many others there are. */
+    static String nearest(String given, List<String> known) {
+        List<String> sorted = new ArrayList<>(known);
+        sorted.sort(java.util.Comparator.comparingInt((String k) -> closeness(given, k, Integer.MAX_VALUE - 1))
+                .thenComparing(java.util.Comparator.naturalOrder()));
+        List<String> shown = sorted.subList(0, Math.min(KNOWN_SHOWN, sorted.size()));
+        return String.join(", ", shown) + (sorted.size() > shown.size() ? " and " + (sorted.size() - shown.size())
+                + " more" : "");
     }
 
     private static int distance(String a, String b) {
@@ -205,6 +255,17 @@ final class Binder {
         return optionalText(m, path, key);
     }
 
+    /** A required id: text of at most {@link #MAX_ID} characters. */
+    Optional<String> id(Node.MapNode m, String path, String why) {
+        Optional<String> id = text(m, path, "id", why);
+        if (id.isPresent() && id.get().length() > MAX_ID) {
+            problem(value(m, "id"), join(path, "id"), "found an id of " + id.get().length() + " characters - ids are"
+                    + " at most " + MAX_ID + ", so that sheets can show them whole");
+            return Optional.empty();
+        }
+        return id;
+    }
+
     /** An optional text value; empty if missing or invalid. */
     Optional<String> optionalText(Node.MapNode m, String path, String key) {
         if (!has(m, key)) {
@@ -250,8 +311,12 @@ final class Binder {
         }
         double v = s.number();
         String u = f.unit().isEmpty() ? "" : " " + f.unit();
-        if (!Double.isFinite(v)) {
+        if (!Double.isFinite(v) || YAML_INFINITY_OR_NAN.matcher(s.text()).matches()) {
             problem(n, path, "expected a finite number, found " + s.text());
+            return OptionalDouble.empty();
+        }
+        if (!isDecimal(s)) {
+            problem(n, path, notDecimal(s));
             return OptionalDouble.empty();
         }
         boolean low = f.minExclusive() ? !(v > f.min()) : !(v >= f.min());
@@ -263,6 +328,16 @@ final class Binder {
             return OptionalDouble.empty();
         }
         return OptionalDouble.of(v);
+    }
+
+    /** Whether a number scalar is written in plain decimal, as this reader reads it. */
+    static boolean isDecimal(Node.Scalar s) {
+        return DECIMAL.matcher(s.text()).matches();
+    }
+
+    static String notDecimal(Node.Scalar s) {
+        return "found " + s.text() + " - write numbers in plain decimal, such as 250 or 0.25"
+                + " (leading zeros, 0x, 0o, _ and : are refused: YAML would not read them as decimal)";
     }
 
     /** A whole number of a mapping, as its field describes (the field must have a default or be required). */
@@ -287,7 +362,13 @@ final class Binder {
         }
         Node n = value(m, key);
         if (n instanceof Node.Scalar s && s.type() == Node.ScalarType.BOOLEAN) {
-            return Optional.of(Boolean.parseBoolean(s.text().toLowerCase(java.util.Locale.ROOT)));
+            String word = s.text().toLowerCase(java.util.Locale.ROOT);
+            if (word.equals("true") || word.equals("false")) {
+                return Optional.of(word.equals("true"));
+            }
+            // YAML 1.1 also reads yes, no, on and off as booleans; a study says true or false
+            problem(n, join(path, key), "found '" + s.text() + "' - write true or false");
+            return Optional.empty();
         }
         problem(at(m, key), join(path, key), "expected true or false, found " + (n == null ? "nothing" : n.kindName()));
         return Optional.empty();

@@ -74,9 +74,9 @@ sealed interface Node permits Node.MapNode, Node.ListNode, Node.Scalar {
         @Override
         public String kindName() {
             return switch (type) {
-                case STRING -> "'" + text + "'";
-                case NUMBER -> text;
-                case BOOLEAN -> text;
+                case STRING -> "'" + Binder.echo(text) + "'";
+                case NUMBER -> Binder.echo(text);
+                case BOOLEAN -> Binder.echo(text);
                 case NULL -> "nothing";
             };
         }

@@ -11,9 +11,16 @@ package coordination.core.study;
  */
 public record Problem(String file, int line, int column, String path, String message) {
 
-    /** @return the problem as {@code FILE:LINE:COLUMN: path: message} */
+    /**
+     * The problem as {@code FILE:LINE:COLUMN: path: message}, on one line: any control character
+     * the file name, a key or a quoted value holds is escaped, so no problem can print a second,
+     * forged line.
+     *
+     * @return the line
+     */
     @Override
     public String toString() {
-        return file + ":" + line + ":" + column + ": " + (path.isEmpty() ? "" : path + ": ") + message;
+        return TextRules.printable(file) + ":" + line + ":" + column + ": "
+                + (path.isEmpty() ? "" : TextRules.printable(path) + ": ") + TextRules.printable(message);
     }
 }

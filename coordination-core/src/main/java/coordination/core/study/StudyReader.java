@@ -117,16 +117,15 @@ public final class StudyReader {
     private static final NumberField RATING_RATIO = number("rating_ratio", "").from(1).to(1000).required();
     private static final NumberField INTERVAL = number("interval_s", "s").from(0).to(100).required();
 
-    private final String file;
-    private final List<Problem> problems = new ArrayList<>();
+    private final Problems problems;
     private final Binder b;
     private final Set<String> declared = new HashSet<>();
     private OptionalDouble studyKv = OptionalDouble.empty();
     private OptionalDouble frequency = OptionalDouble.empty();
 
     private StudyReader(String file) {
-        this.file = file;
-        this.b = new Binder(file, problems);
+        this.problems = new Problems(file);
+        this.b = new Binder(problems);
     }
 
     private static Map<String, String> curveWords() {
@@ -156,15 +155,27 @@ public final class StudyReader {
     public static Study read(Path path) {
         String shown = path.toString();
         String name = path.getFileName() == null ? "study" : path.getFileName().toString();
+        Optional<TextRules.Refusal> badName = TextRules.check(name, false);
+        if (badName.isPresent()) {
+            throw single(shown, "the file name " + badName.get().message() + "; rename the file");
+        }
         int dot = name.lastIndexOf('.');
         String base = dot > 0 ? name.substring(0, dot) : name;
         try {
+            if (!Files.isRegularFile(path)) {
+                throw single(shown, Files.exists(path) ? "not a regular file (a pipe, a device or a socket)"
+                        : "no such file");
+            }
             long size = Files.size(path);
             if (size > MAX_FILE_BYTES) {
                 throw single(shown, "the file is " + size + " bytes - study files are limited to " + MAX_FILE_BYTES
                         + " bytes (1 MiB)");
             }
-            byte[] bytes = Files.readAllBytes(path);
+            // read at most one byte more than the limit, whatever size the file system reports
+            byte[] bytes;
+            try (java.io.InputStream in = Files.newInputStream(path)) {
+                bytes = in.readNBytes((int) MAX_FILE_BYTES + 1);
+            }
             if (bytes.length > MAX_FILE_BYTES) {
                 throw single(shown, "the file is over " + MAX_FILE_BYTES + " bytes - study files are limited to 1 MiB");
             }
@@ -177,6 +188,10 @@ public final class StudyReader {
                 throw single(shown, "the file is not UTF-8 text");
             }
             return parse(shown, base, text);
+        } catch (java.nio.file.AccessDeniedException e) {
+            throw single(shown, "cannot read the file: permission denied");
+        } catch (java.nio.file.NoSuchFileException e) {
+            throw single(shown, "cannot read the file: no such file");
         } catch (IOException e) {
             throw single(shown, "cannot read the file: " + e.getMessage());
         }
@@ -211,25 +226,12 @@ public final class StudyReader {
             study = r.study(root, name);
         }
         if (!r.problems.isEmpty() || study.isEmpty()) {
-            List<Problem> sorted = new ArrayList<>(r.problems);
-            sorted.sort((x, y) -> x.line() != y.line() ? Integer.compare(x.line(), y.line())
-                    : Integer.compare(x.column(), y.column()));
-            if (sorted.isEmpty()) {
-                sorted.add(new Problem(file, 1, 1, "", "the study could not be read"));
+            if (r.problems.isEmpty()) {
+                r.problems.add(1, 1, "", "the study could not be read");
             }
-            throw new StudyFileException(dedupe(sorted));
+            throw new StudyFileException(r.problems.sorted());
         }
         return study.get();
-    }
-
-    private static List<Problem> dedupe(List<Problem> problems) {
-        List<Problem> out = new ArrayList<>();
-        for (Problem p : problems) {
-            if (!out.contains(p)) {
-                out.add(p);
-            }
-        }
-        return out;
     }
 
     private Optional<Study> study(Node rootNode, String name) {
@@ -244,7 +246,8 @@ public final class StudyReader {
             b.missing(root, "", "format", "write 'format: 1'");
         } else {
             Node f = b.value(root, "format");
-            if (!(f instanceof Node.Scalar s && s.type() == Node.ScalarType.NUMBER && s.number() == 1)) {
+            if (!(f instanceof Node.Scalar s && s.type() == Node.ScalarType.NUMBER && Binder.isDecimal(s)
+                    && s.number() == 1)) {
                 b.problem(f == null ? root : f, "format", "found " + (f == null ? "nothing" : f.kindName())
                         + " - this reader knows format 1 only");
                 return Optional.empty();
@@ -317,6 +320,11 @@ public final class StudyReader {
     private Optional<String> scalarText(Node.MapNode m, String key) {
         Node n = b.value(m, key);
         if (n instanceof Node.Scalar s && s.type() != Node.ScalarType.NULL) {
+            if (s.text().length() > Binder.MAX_TEXT) {
+                b.problem(n, key, "found text of " + s.text().length() + " characters - at most " + Binder.MAX_TEXT
+                        + " are accepted");
+                return Optional.empty();
+            }
             return Optional.of(s.text());
         }
         b.problem(b.at(m, key), key, "expected a date or text, found " + (n == null ? "nothing" : n.kindName()));
@@ -334,7 +342,7 @@ public final class StudyReader {
         int before = b.problemCount();
         b.allowOnly(m, path, "id", "conductor", "insulation", "size_mm2", "size", "parallel", "initial_c", "final_c",
                 "load", "method", "fault_ka");
-        Optional<String> id = b.text(m, path, "id", "every cable needs an id");
+        Optional<String> id = b.id(m, path, "every cable needs an id");
         Optional<ConductorMaterial> conductor = b.choice(m, path, "conductor", CONDUCTORS);
         Optional<Insulation> insulation = b.choice(m, path, "insulation", INSULATIONS);
         OptionalDouble size = OptionalDouble.empty();
@@ -348,8 +356,14 @@ public final class StudyReader {
             Optional<String> s = b.text(m, path, "size", "");
             if (s.isPresent()) {
                 try {
-                    size = OptionalDouble.of(ConductorSizes.parseMm2(s.get()));
-                    sizeText = s.get().trim();
+                    double mm2 = ConductorSizes.parseMm2(s.get());
+                    if (mm2 > SIZE.max()) {
+                        b.problem(b.value(m, "size"), path + ".size", "found " + s.get().trim() + ", "
+                                + Checks.format(mm2) + " mm2 - must be at most " + Checks.format(SIZE.max()) + " mm2");
+                    } else {
+                        size = OptionalDouble.of(mm2);
+                        sizeText = s.get().trim();
+                    }
                 } catch (CoordinationException | IllegalArgumentException e) {
                     b.problem(b.value(m, "size"), path + ".size", e.getMessage());
                 }
@@ -432,7 +446,7 @@ public final class StudyReader {
         }
         Node.MapNode m = mapped.get();
         Optional<DeviceKind> type = b.choice(m, path, "type", TYPES);
-        Optional<String> id = b.text(m, path, "id", "every device needs an id");
+        Optional<String> id = b.id(m, path, "every device needs an id");
         if (type.isEmpty()) {
             return Optional.empty();
         }
@@ -841,9 +855,9 @@ public final class StudyReader {
             List<String> known = declared.stream().filter(d -> d.startsWith(what + ":"))
                     .map(d -> d.substring(what.length() + 1)).sorted().toList();
             String hint = Binder.suggestion(v.get(), known);
-            b.problem(b.value(m, key), Binder.join(path, key), "no " + what + " has the id '" + v.get() + "'"
+            b.problem(b.value(m, key), Binder.join(path, key), "no " + what + " has the id '" + Binder.echo(v.get()) + "'"
                     + (hint != null ? " - did you mean '" + hint + "'?" : known.isEmpty() ? " - the study has none"
-                    : " - known: " + String.join(", ", known)));
+                    : " - known: " + Binder.nearest(v.get(), known)));
             return Optional.empty();
         }
         return v;

@@ -29,6 +29,22 @@ class ConductorSizesTest {
     }
 
     @Test
+    void zerosCountTheSizesAboveOne() {
+        // ASTM B258: 1/0 (0), 2/0 (00), 3/0 (000) and 4/0 (0000) AWG; 2/0 is 133,100 cmil, 67.43 mm2
+        assertThat(ConductorSizes.parseMm2("0 AWG"), is(ConductorSizes.awgMm2("1/0")));
+        assertThat(ConductorSizes.parseMm2("00 AWG"), closeTo(67.43, 0.01));
+        assertThat(ConductorSizes.parseMm2("000 AWG"), is(ConductorSizes.awgMm2("3/0")));
+        assertThat(ConductorSizes.parseMm2("0000 AWG"), is(ConductorSizes.awgMm2("4/0")));
+    }
+
+    @Test
+    void aNegativeAreaHasNoNextSize() {
+        IllegalArgumentException e = assertThrows(IllegalArgumentException.class,
+                () -> ConductorSizes.nextAwgOrKcmil(-1));
+        assertEquals("conductor area: found -1 mm2 - must be a finite number above 0", e.getMessage());
+    }
+
+    @Test
     void nextStandardSizes() {
         // IEC 60228 series
         assertThat(ConductorSizes.nextIecSizeMm2(51), is(70.0));

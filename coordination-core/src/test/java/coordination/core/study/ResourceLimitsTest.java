@@ -13,9 +13,13 @@ import java.time.Duration;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 
-/** Hostile inputs are refused quickly, with one clear line, and without reading them whole. */
+/**
+ * Hostile inputs are refused with one clear line and without reading them whole. The assertions
+ * are about the bounded work (the lines reported, the bytes read); the time limit only guards
+ * against a hang and is generous, since CI machines are loaded.
+ */
 class ResourceLimitsTest {
-    private static final Duration LIMIT = Duration.ofSeconds(5);
+    private static final Duration LIMIT = Duration.ofSeconds(60);
 
     private static String refusal(String text) {
         StudyFileException e = assertTimeoutPreemptively(LIMIT,
