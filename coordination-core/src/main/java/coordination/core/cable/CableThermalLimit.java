@@ -41,6 +41,7 @@ public record CableThermalLimit(String id, ConductorMaterial material, Insulatio
      * @throws IllegalArgumentException if the size, parallel count or temperatures are out of range
      */
     public CableThermalLimit {
+        Checks.given("cable: id", id);
         String who = "cable '" + id + "'";
         if (material == null || insulation == null || method == null) {
             throw new IllegalArgumentException(who + ": material, insulation and method must be given");

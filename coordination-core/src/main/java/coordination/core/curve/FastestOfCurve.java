@@ -1,5 +1,6 @@
 package coordination.core.curve;
 
+import coordination.core.internal.Checks;
 import java.util.List;
 
 /**
@@ -18,6 +19,8 @@ public final class FastestOfCurve implements TimeCurrentCurve {
      * @throws IllegalArgumentException if no stage is given or a stage has a limited domain
      */
     public FastestOfCurve(String label, List<? extends TimeCurrentCurve> stages) {
+        Checks.given("combined stages: label", label);
+        Checks.given(label + ": stages", stages);
         if (stages.isEmpty()) {
             throw new IllegalArgumentException(label + ": stages: found none - must have at least one");
         }

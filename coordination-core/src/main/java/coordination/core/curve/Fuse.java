@@ -28,7 +28,10 @@ public final class Fuse implements ProtectiveDevice {
      */
     public Fuse(String id, double ratingAmps, TabulatedCurve melting, TabulatedCurve clearing,
             OptionalDouble clearingI2tA2s) {
-        this.id = id;
+        this.id = Checks.given("fuse: id", id);
+        Checks.given("fuse '" + id + "': melting curve", melting);
+        Checks.given("fuse '" + id + "': clearing curve", clearing);
+        Checks.given("fuse '" + id + "': clearing I2t", clearingI2tA2s);
         this.ratingAmps = Checks.positive("fuse '" + id + "': rating", ratingAmps, "A");
         if (clearingI2tA2s.isPresent()) {
             Checks.positive("fuse '" + id + "': clearing I2t", clearingI2tA2s.getAsDouble(), "A2s");

@@ -46,6 +46,7 @@ public record MiniatureBreaker(String id, McbType type, double ratedAmps, double
      * @throws IllegalArgumentException if a parameter is out of range
      */
     public MiniatureBreaker {
+        Checks.given("mcb: id", id);
         Checks.positive("mcb '" + id + "': rating", ratedAmps, "A");
         Checks.inRange("mcb '" + id + "': fastest clearing time", fastestSeconds, 0.0, INSTANTANEOUS_LIMIT_SECONDS, "s");
         if (!Double.isNaN(letThroughI2tA2s)) {

@@ -43,6 +43,7 @@ public record TripUnitCurve(
      * @throws IllegalArgumentException if a setting is out of its range
      */
     public TripUnitCurve {
+        Checks.given("trip unit curve: label", label);
         Checks.positive(label + ": long-time pickup", longTimePickupAmps, "A");
         Checks.positive(label + ": long-time I2t", longTimeI2tA2s, "A2s");
         if (!(shortTimePickupAmps > 0)) {

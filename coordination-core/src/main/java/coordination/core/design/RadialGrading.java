@@ -42,6 +42,24 @@ public final class RadialGrading {
     public record Link(Relay relay, double referFactor, CableThermalLimit cable, MarginRequirement cableMargin,
             double faultMinAmps,
             double faultMaxAmps, double minMultiplier, double maxMultiplier) {
+        /**
+         * Validates the link.
+         *
+         * @throws IllegalArgumentException if the relay or requirement is missing, or a number is out of range
+         */
+        public Link {
+            Checks.given("grading link: relay", relay);
+            Checks.given("grading link '" + relay.id() + "': cable margin", cableMargin);
+            Checks.positive("grading link '" + relay.id() + "': referral factor", referFactor, "");
+            Checks.currentRange("grading link '" + relay.id() + "': fault range", faultMinAmps, faultMaxAmps);
+            Checks.positive("grading link '" + relay.id() + "': smallest multiplier", minMultiplier, "");
+            Checks.positive("grading link '" + relay.id() + "': largest multiplier", maxMultiplier, "");
+            if (maxMultiplier < minMultiplier) {
+                throw new IllegalArgumentException("grading link '" + relay.id() + "': largest multiplier "
+                        + Checks.format(maxMultiplier) + " is below the smallest " + Checks.format(minMultiplier)
+                        + " - must be at or above it");
+            }
+        }
     }
 
     /**

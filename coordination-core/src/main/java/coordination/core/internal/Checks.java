@@ -61,6 +61,22 @@ public final class Checks {
     }
 
     /**
+     * Requires an argument to be given.
+     *
+     * @param subject the subject and argument name, e.g. {@code "fuse: id"}
+     * @param value the argument
+     * @param <T> its type
+     * @return the argument
+     * @throws IllegalArgumentException if it is null
+     */
+    public static <T> T given(String subject, T value) {
+        if (value == null) {
+            throw new IllegalArgumentException(subject + ": found null - must be given");
+        }
+        return value;
+    }
+
+    /**
      * Requires a range of currents: both ends finite and above zero, the upper at or above the lower.
      *
      * @param subject what the range is, e.g. {@code "check range"}

@@ -60,6 +60,9 @@ public final class CableCheck {
      */
     public CableCheck(ProtectiveDevice device, CableThermalLimit cable, double fromAmps, double toAmps,
             MarginRequirement requirement, DcOffset dcOffset) {
+        Checks.given("cable check: device", device);
+        Checks.given("cable check: cable", cable);
+        Checks.given("cable check: requirement", requirement);
         Checks.currentRange("check range", fromAmps, toAmps);
         this.device = device;
         this.cable = cable;

@@ -1,5 +1,6 @@
 package coordination.core.margin;
 
+import coordination.core.curve.DeviceKind;
 import coordination.core.curve.Fuse;
 import coordination.core.curve.ProtectiveDevice;
 import coordination.core.curve.TimeCurrentCurve;
@@ -37,7 +38,16 @@ public final class GradingCheck {
      */
     public GradingCheck(ProtectiveDevice upstream, ProtectiveDevice downstream, double fromAmps, double toAmps,
             GradingRequirement requirement) {
+        Checks.given("grading check: upstream device", upstream);
+        Checks.given("grading check: downstream device", downstream);
+        Checks.given("grading check: requirement", requirement);
         Checks.currentRange("grading range", fromAmps, toAmps);
+        if (requirement instanceof GradingRequirement.RatingRatio
+                && !(upstream.kind() == DeviceKind.FUSE && downstream.kind() == DeviceKind.FUSE)) {
+            throw new IllegalArgumentException("grading check: requirement: a rating ratio applies to two fuses, found "
+                    + upstream.kind().key() + " '" + upstream.id() + "' over " + downstream.kind().key() + " '"
+                    + downstream.id() + "' - use an interval or no overlap");
+        }
         this.upstream = upstream;
         this.downstream = downstream;
         this.up = upstream.minimumCurve();
