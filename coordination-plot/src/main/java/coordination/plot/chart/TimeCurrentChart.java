@@ -22,6 +22,7 @@ import org.knowm.xchart.XYChart;
 import org.knowm.xchart.XYChartBuilder;
 import org.knowm.xchart.XYSeries;
 import org.knowm.xchart.style.Styler;
+import org.knowm.xchart.style.lines.SeriesLines;
 import org.knowm.xchart.style.markers.SeriesMarkers;
 
 /**
@@ -360,11 +361,12 @@ public final class TimeCurrentChart {
                 px[xMinCurve.length + i] = xMaxCurve[xMaxCurve.length - 1 - i];
                 py[xMinCurve.length + i] = yMaxCurve[xMaxCurve.length - 1 - i];
             }
-            XYSeries band = chart.addSeries(unique(d.id() + " band"), px, py);
+            double[][] outline = simplify(px, py);
+            XYSeries band = chart.addSeries(unique(d.id() + " band"), outline[0], outline[1]);
             band.setXYSeriesRenderStyle(XYSeries.XYSeriesRenderStyle.PolygonArea);
             band.setFillColor(Palette.band(index));
-            band.setLineColor(new Color(0, 0, 0, 0));
-            band.setLineStyle(new BasicStroke(0f));
+            // XChart skips an outline only for its own NONE object: an invisible stroke is still written
+            band.setLineStyle(SeriesLines.NONE);
             band.setMarker(SeriesMarkers.NONE);
             band.setShowInLegend(false);
         }
@@ -393,11 +395,11 @@ public final class TimeCurrentChart {
         y[n + 1] = yMax * 10;
         x[n + 2] = xMin;
         y[n + 2] = yMax * 10;
-        XYSeries s = chart.addSeries(unique(cable.id() + " damaged"), x, y);
+        double[][] outline = simplify(x, y);
+        XYSeries s = chart.addSeries(unique(cable.id() + " damaged"), outline[0], outline[1]);
         s.setXYSeriesRenderStyle(XYSeries.XYSeriesRenderStyle.PolygonArea);
         s.setFillColor(Palette.DAMAGED);
-        s.setLineColor(new Color(0, 0, 0, 0));
-        s.setLineStyle(new BasicStroke(0f));
+        s.setLineStyle(SeriesLines.NONE);
         s.setMarker(SeriesMarkers.NONE);
         s.setShowInLegend(false);
     }

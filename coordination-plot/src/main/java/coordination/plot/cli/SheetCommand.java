@@ -1,6 +1,7 @@
 package coordination.plot.cli;
 
 import coordination.core.study.Problem;
+import coordination.core.study.TextRules;
 import coordination.core.study.StudyReport;
 import coordination.plot.sheet.OutputFormat;
 import coordination.plot.sheet.SheetWriter;
@@ -50,7 +51,18 @@ final class SheetCommand implements Callable<Integer> {
         this.err = err;
     }
 
-    private record Outcome(Path file, List<Problem> problems, boolean pass, String error, int written) {
+    /** What became of one study. */
+    private enum Verdict {
+        PASS("pass"), FAIL("failing"), NOT_READ("not read"), INTERNAL_ERROR("internal error");
+
+        private final String word;
+
+        Verdict(String word) {
+            this.word = word;
+        }
+    }
+
+    private record Outcome(Path file, List<Problem> problems, Verdict verdict, String error, int written) {
     }
 
     @Override
@@ -76,22 +88,39 @@ final class SheetCommand implements Callable<Integer> {
             err.println("coordination sheet: no study files (*.yaml) in " + inputs);
             return ExitCodes.BAD_INPUT;
         }
-        Map<String, Path> names = new HashMap<>();
+        // every output name, and the study that writes it: two studies writing one name, or a study
+        // writing over one of the inputs, are refused; the others go ahead
+        Map<String, Path> owner = new HashMap<>();
+        Map<Path, String> refused = new HashMap<>();
+        Set<Path> inputs = new java.util.HashSet<>();
         for (Path f : files) {
-            String base = SheetWriter.safeName(StudyInputs.baseName(f));
-            Path other = names.putIfAbsent(base, f);
-            if (other != null) {
-                err.println(f + ": writes the same sheet name '" + base + "' as " + other
-                        + " - rename one of them or run them into different folders");
-                return ExitCodes.BAD_INPUT;
+            inputs.add(f.toAbsolutePath().normalize());
+        }
+        Path target = output.toAbsolutePath().normalize();
+        for (Path f : files) {
+            for (String name : SheetWriter.outputNames(StudyInputs.baseName(f), chosen)) {
+                Path other = owner.putIfAbsent(name, f);
+                if (other != null && !other.equals(f)) {
+                    String why = "writes " + name + ", as " + other + " does - rename one of them or run them into"
+                            + " different folders";
+                    refused.putIfAbsent(f, why);
+                    refused.putIfAbsent(other, "writes " + name + ", as " + f + " does - rename one of them or run"
+                            + " them into different folders");
+                }
+                if (inputs.contains(target.resolve(name))) {
+                    refused.putIfAbsent(f, "would write " + name + " over a study file given to this run - choose"
+                            + " another output folder");
+                }
             }
         }
         ExecutorService pool = Executors.newFixedThreadPool(Math.max(1, Math.min(threads, files.size())));
         List<Future<Outcome>> futures = new ArrayList<>();
         for (Path f : files) {
-            futures.add(pool.submit(() -> process(f, chosen)));
+            String why = refused.get(f);
+            futures.add(pool.submit(() -> why != null ? new Outcome(f, List.of(), Verdict.NOT_READ, why, 0)
+                    : process(f, chosen)));
         }
-        Progress progress = new Progress(out, files.size());
+        Progress progress = new Progress(err, files.size());
         List<Outcome> outcomes = new ArrayList<>();
         try {
             for (Future<Outcome> fu : futures) {
@@ -104,41 +133,56 @@ final class SheetCommand implements Callable<Integer> {
             pool.shutdownNow();
             progress.done();
         }
-        int invalid = 0;
-        int failed = 0;
+        Map<Verdict, List<String>> byVerdict = new java.util.EnumMap<>(Verdict.class);
         int written = 0;
         for (Outcome o : outcomes) {
             for (Problem p : o.problems()) {
                 err.println(p);
             }
             if (o.error() != null) {
-                err.println(o.file() + ": " + o.error());
+                err.println(TextRules.printable(o.file().toString()) + ": " + o.error());
             }
-            if (!o.problems().isEmpty() || o.error() != null) {
-                invalid++;
-            } else if (!o.pass()) {
-                failed++;
-            }
+            byVerdict.computeIfAbsent(o.verdict(), k -> new ArrayList<>()).add(TextRules.printable(o.file().toString()));
             written += o.written();
         }
-        int ok = outcomes.size() - invalid - failed;
-        out.println("sheets: " + outcomes.size() + " studies, " + ok + " pass, " + failed + " fail, " + invalid
-                + " not read; " + written + " files in " + output);
-        return invalid > 0 ? ExitCodes.BAD_INPUT : failed > 0 ? ExitCodes.CHECK_FAILED : ExitCodes.PASS;
+        out.println("sheets: " + outcomes.size() + " studies, " + count(byVerdict, Verdict.PASS) + " pass, "
+                + count(byVerdict, Verdict.FAIL) + " fail, " + (count(byVerdict, Verdict.NOT_READ)
+                + count(byVerdict, Verdict.INTERNAL_ERROR)) + " not read; " + written + " files in "
+                + TextRules.printable(output.toString()));
+        for (Verdict v : List.of(Verdict.FAIL, Verdict.NOT_READ, Verdict.INTERNAL_ERROR)) {
+            if (byVerdict.containsKey(v)) {
+                out.println("  " + v.word + ": " + String.join(", ", byVerdict.get(v)));
+            }
+        }
+        if (byVerdict.containsKey(Verdict.INTERNAL_ERROR)) {
+            return ExitCodes.INTERNAL_ERROR;
+        }
+        return byVerdict.containsKey(Verdict.NOT_READ) ? ExitCodes.BAD_INPUT
+                : byVerdict.containsKey(Verdict.FAIL) ? ExitCodes.CHECK_FAILED : ExitCodes.PASS;
+    }
+
+    private static int count(Map<Verdict, List<String>> byVerdict, Verdict v) {
+        return byVerdict.getOrDefault(v, List.of()).size();
     }
 
     private Outcome process(Path file, Set<OutputFormat> chosen) {
-        StudyInputs.Loaded l = StudyInputs.load(file);
-        if (l.study() == null) {
-            return new Outcome(file, l.problems(), false, null, 0);
-        }
-        StudyReport report = StudyReport.evaluate(l.study());
         try {
+            StudyInputs.Loaded l = StudyInputs.load(file);
+            if (l.study() == null) {
+                return new Outcome(file, l.problems(), Verdict.NOT_READ, null, 0);
+            }
+            StudyReport report = StudyReport.evaluate(l.study());
             Map<String, byte[]> files = SheetWriter.render(l.study(), report, chosen, dpi);
-            SheetWriter.write(output, files);
-            return new Outcome(file, List.of(), report.pass(), null, files.size());
-        } catch (IOException e) {
-            return new Outcome(file, List.of(), false, "cannot write to " + output + ": " + e.getMessage(), 0);
+            try {
+                SheetWriter.write(output, files);
+            } catch (IOException e) {
+                return new Outcome(file, List.of(), Verdict.NOT_READ, "cannot write to " + output + ": "
+                        + e.getMessage(), 0);
+            }
+            return new Outcome(file, List.of(), report.pass() ? Verdict.PASS : Verdict.FAIL, null, files.size());
+        } catch (IOException | RuntimeException | OutOfMemoryError | StackOverflowError e) {
+            // one study's defect must not abandon the others; nothing of it was written
+            return new Outcome(file, List.of(), Verdict.INTERNAL_ERROR, "internal error: " + e, 0);
         }
     }
 

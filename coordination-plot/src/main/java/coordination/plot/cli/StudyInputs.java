@@ -4,6 +4,7 @@ import coordination.core.study.Problem;
 import coordination.core.study.Study;
 import coordination.core.study.StudyFileException;
 import coordination.core.study.StudyReader;
+import coordination.core.study.TextRules;
 import java.io.IOException;
 import java.io.PrintStream;
 import java.nio.file.Files;
@@ -28,24 +29,53 @@ final class StudyInputs {
         List<Path> files = new ArrayList<>();
         boolean ok = true;
         for (Path a : args) {
+            String shown = TextRules.printable(a.toString());
             if (Files.isDirectory(a)) {
                 try (Stream<Path> s = Files.list(a)) {
-                    s.filter(p -> {
+                    for (Path p : s.sorted().toList()) {
                         String n = p.getFileName().toString();
-                        return (n.endsWith(".yaml") || n.endsWith(".yml")) && !n.startsWith(".") && Files.isRegularFile(p);
-                    }).sorted().forEach(files::add);
+                        if (!isStudyName(n) || !Files.isRegularFile(p)) {
+                            continue;
+                        }
+                        if (n.startsWith(".")) {
+                            err.println(TextRules.printable(p.toString()) + ": skipped - hidden files are not read"
+                                    + " from a folder; name the file to read it");
+                            continue;
+                        }
+                        files.add(p);
+                    }
                 } catch (IOException e) {
-                    err.println(a + ": cannot list the folder: " + e.getMessage());
+                    err.println(shown + ": cannot list the folder: " + reason(e));
                     ok = false;
                 }
             } else if (Files.isRegularFile(a)) {
                 files.add(a);
+            } else if (Files.exists(a)) {
+                err.println(shown + ": not a regular file (a pipe, a device or a socket) - give a study file");
+                ok = false;
             } else {
-                err.println(a + ": no such study file or folder");
+                err.println(shown + ": no such study file or folder");
                 ok = false;
             }
         }
         return ok ? files : null;
+    }
+
+    /** A study file's name ends in .yaml or .yml, in any case. */
+    static boolean isStudyName(String name) {
+        String n = name.toLowerCase(java.util.Locale.ROOT);
+        return n.endsWith(".yaml") || n.endsWith(".yml");
+    }
+
+    /** Why a file operation failed, in words rather than an exception's name. */
+    static String reason(IOException e) {
+        if (e instanceof java.nio.file.AccessDeniedException) {
+            return "permission denied";
+        }
+        if (e instanceof java.nio.file.NoSuchFileException) {
+            return "no such file or folder";
+        }
+        return TextRules.printable(String.valueOf(e.getMessage()));
     }
 
     static String baseName(Path file) {

@@ -64,10 +64,17 @@ public final class Drawing {
         SVGGraphics2D g = new SVGGraphics2D(w, h);
         // a fixed prefix for clip and gradient ids: the default one is derived from the clock
         g.setDefsKeyPrefix("c");
+        // a hundredth of a point is far below what any viewer shows, and halves the document
+        g.setGeomDoubleConverter(Drawing::twoDecimals);
         hints(g);
         painter.accept(g);
         g.dispose();
         return g.getSVGDocument().getBytes(StandardCharsets.UTF_8);
+    }
+
+    private static String twoDecimals(double v) {
+        double r = Math.round(v * 100) / 100.0;
+        return r == Math.rint(r) ? Long.toString((long) r) : Double.toString(r);
     }
 
     private static byte[] png(double w, double h, int dpi, Consumer<Graphics2D> painter) throws IOException {
@@ -124,7 +131,8 @@ public final class Drawing {
             ids.add(new COSString(id));
             doc.getDocument().getTrailer().setItem(COSName.ID, ids);
             ByteArrayOutputStream out = new ByteArrayOutputStream();
-            doc.save(out);
+            // a classic cross-reference table: the compressed one of PDFBox 3.0 misstates its object count (qpdf --check)
+            doc.save(out, org.apache.pdfbox.pdfwriter.compress.CompressParameters.NO_COMPRESSION);
             return out.toByteArray();
         }
     }

@@ -1,7 +1,5 @@
 package coordination.plot.sheet;
 
-import java.util.Locale;
-
 /** File formats of charts and sheets. */
 public enum OutputFormat {
     /** Scalable vector graphics. */
@@ -25,13 +23,13 @@ public enum OutputFormat {
     /**
      * Finds a format by name.
      *
-     * @param name {@code svg}, {@code png} or {@code pdf}, any case
+     * @param name {@code svg}, {@code png} or {@code pdf}, as written here
      * @return the format
      * @throws IllegalArgumentException for any other name
      */
     public static OutputFormat parse(String name) {
         for (OutputFormat f : values()) {
-            if (f.extension.equals(name.trim().toLowerCase(Locale.ROOT))) {
+            if (f.extension.equals(name)) {
                 return f;
             }
         }

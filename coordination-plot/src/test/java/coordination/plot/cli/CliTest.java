@@ -172,13 +172,15 @@ class CliTest {
     }
 
     @Test
-    void controlCharactersInAFileNameNeverReachTheOutputName(@TempDir Path tmp) throws Exception {
+    void controlCharactersInAFileNameAreRefusedAndNothingIsWritten(@TempDir Path tmp) throws Exception {
         Path study = tmp.resolve("line\nbreak\tand\u0007bell.yaml");
         Files.copy(SAMPLES.resolve("02-filter-house-fuse.yaml"), study);
         Path out = tmp.resolve("out");
-        assertThat(run("sheet", study.toString(), "-o", out.toString()).code(), is(ExitCodes.PASS));
-        assertThat(files(out), is(List.of("line_break_and_bell.png", "line_break_and_bell.report.json",
-                "line_break_and_bell.svg")));
+        InProcess.Run r = run("sheet", study.toString(), "-o", out.toString());
+        assertThat(r.code(), is(ExitCodes.BAD_INPUT));
+        assertThat(r.err(), containsString("line\\u000Abreak\\u0009and\\u0007bell.yaml:1:1: the file name holds the"
+                + " control character U+000A"));
+        assertThat(Files.exists(out) ? files(out) : List.of(), is(List.of()));
     }
 
     @Test

@@ -82,6 +82,25 @@ class SheetRenderTest {
         assertThat(new String(pdf, 0, 5, java.nio.charset.StandardCharsets.US_ASCII), is("%PDF-"));
     }
 
+    /**
+     * A classic cross-reference table (ISO 32000-1, 7.5.4) whose trailer states one object more than the
+     * highest object number (7.5.5); PDFBox 3.0's compressed cross-reference stream misstated it.
+     */
+    @ParameterizedTest
+    @MethodSource("samples")
+    void pdfTrailerCountsItsObjects(Path file) throws Exception {
+        String pdf = new String(sheet(file).render(OutputFormat.PDF, 150), java.nio.charset.StandardCharsets.ISO_8859_1);
+        java.util.regex.Matcher obj = java.util.regex.Pattern.compile("(?m)^(\\d+) 0 obj").matcher(pdf);
+        int highest = 0;
+        while (obj.find()) {
+            highest = Math.max(highest, Integer.parseInt(obj.group(1)));
+        }
+        assertThat("no classic cross-reference table", pdf.contains("\nxref\n"), is(true));
+        java.util.regex.Matcher size = java.util.regex.Pattern.compile("/Size (\\d+)").matcher(pdf);
+        assertThat("no /Size in the trailer", size.find(), is(true));
+        assertThat(Integer.parseInt(size.group(1)), is(highest + 1));
+    }
+
     @ParameterizedTest
     @MethodSource("samples")
     void parallelRendersAreByteIdentical(Path file) throws Exception {
