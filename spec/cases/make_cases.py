@@ -125,6 +125,36 @@ valid["cable-awg-zeros"] = (HEAD.format(title="AWG sizes written with zeros", kv
     + "cables:\n  - {id: C1, conductor: copper, insulation: xlpe, size: \"00 AWG\", fault_ka: {min: 2, max: 15}}\n"
     + "  - {id: C2, conductor: copper, insulation: xlpe, size: \"0000 AWG\", fault_ka: {min: 2, max: 15}}\n"
     + "devices:\n" + RELAY + "checks:\n  - {cable: C1, device: R1}\n  - {cable: C2, device: R1}\n")
+FUSE_PAIR = (HEAD.format(title="Fuses graded by energy", kv=0.4) + "devices:\n"
+    + "  - id: FU\n    type: fuse\n    rating_a: 315\n    category: gG\n    series: NH-A\n"
+    + "    melting:  [[630, 2000], [1000, 100], [1600, 8], [2500, 0.8], [4000, 0.09], [7000, 0.01]]\n"
+    + "    clearing: [[630, 2400], [1000, 130], [1600, 10], [2500, 1.0], [4000, 0.12], [7000, 0.016]]\n"
+    + "    pre_arcing_i2t: [[7, 490000], [20, 520000], [50, 560000]]\n"
+    + "  - id: FD\n    type: fuse\n    rating_a: 160\n    category: gG\n    series: NH-A\n"
+    + "    melting: [[320, 1500], [500, 60], [800, 5], [1250, 0.5], [2000, 0.05], [3500, 0.008]]\n"
+    + "    clearing: [[320, 1800], [500, 75], [800, 6.5], [1250, 0.65], [2000, 0.07], [3500, 0.012]]\n"
+    + "    clearing_i2t: [[3.5, 147000], [10, 160000], [50, 190000]]\n"
+    + "checks:\n  - {upstream: FU, downstream: FD, rating_ratio: 1.6, range_ka: {min: 0.8, max: 50}}\n")
+valid["fuse-energies-by-points"] = FUSE_PAIR
+valid["relay-tolerance-stated"] = BASE.replace("    breaker_s: 0.05\n", "    breaker_s: 0.05\n"
+    "    tolerance: {time_percent: 5, time_min_s: 0.03, pickup_percent: 5}\n", 1)
+valid["relay-high-current-stated"] = BASE.replace("tms: 0.2}", "tms: 0.2, high_current: band}").replace(
+    "pickup_a: 10000}", "pickup_a: 10000, delay_s: 0.03}")
+valid["mcb-let-through-points"] = (HEAD.format(title="Breaker with a let-through curve", kv=0.23)
+    + "cables:\n  - {id: C1, conductor: copper, insulation: pvc, size_mm2: 2.5, fault_ka: {min: 0.3, max: 6}}\n"
+    + "devices:\n  - {id: M1, type: mcb, curve_type: C, rating_a: 16, fastest_s: 0.004,"
+    + " let_through_i2t: [[0.5, 6000], [1, 9000], [3, 17000], [6, 25000]]}\n"
+    + "checks:\n  - {cable: C1, device: M1}\n")
+valid["cable-medium-voltage"] = (HEAD.format(title="An 11 kV cable", kv=11)
+    + "cables:\n  - {id: C1, conductor: aluminium, insulation: xlpe, size_mm2: 185, voltage_kv: 11,"
+    + " fault_ka: {min: 2, max: 12}}\n" + "devices:\n  - id: R1\n    type: relay\n    breaker_s: 0.07\n"
+    + "    stages:\n      - {curve: iec-standard-inverse, pickup_a: 300, tms: 0.1}\n"
+    + "      - {curve: instantaneous, pickup_a: 4000, delay_s: 0.04}\n"
+    + "checks:\n  - {cable: C1, device: R1, dc_offset: {x_r: 14}}\n")
+valid["check-dc-offset-none"] = BASE.replace("margin_s: 0.1}", "margin_s: 0.1, dc_offset: none}")
+valid["grading-interval-to-clearing"] = BASE.replace("checks:\n", "  - id: R0\n    type: relay\n    breaker_s: 0.05\n"
+    "    stages:\n      - {curve: iec-standard-inverse, pickup_a: 600, tms: 0.35}\n"
+    "checks:\n") + "  - {upstream: R0, downstream: R1, interval_s: 0.3, interval_to: clearing-time, range_ka: {min: 1.5, max: 12}}\n"
 valid["empty-checks"] = HEAD.format(title="A study with nothing to check yet", kv=11) + "devices:\n" + RELAY
 
 BASE_LINES = BASE
@@ -167,6 +197,20 @@ invalid = {
     "relay-multiplier-outside-range": BASE.replace("tms: 0.2}", "tms: 1.2, tms_range: [0.05, 1.0]}"),
     "relay-range-of-other-kind": BASE.replace("curve: iec-standard-inverse, pickup_a: 250, tms: 0.2",
         "curve: ieee-very-inverse, pickup_a: 250, time_dial: 2, tms_range: [0.05, 1]"),
+    "relay-tolerance-too-wide": BASE.replace("    breaker_s: 0.05\n", "    breaker_s: 0.05\n"
+        "    tolerance: {time_percent: 80, pickup_percent: 5}\n", 1),
+    "relay-high-current-unknown": BASE.replace("tms: 0.2}", "tms: 0.2, high_current: clamp}"),
+    "fuse-energy-twice": FUSE_PAIR.replace("    pre_arcing_i2t:", "    pre_arcing_i2t_a2s: 500000\n    pre_arcing_i2t:"),
+    "fuse-category-unknown": FUSE_PAIR.replace("category: gG\n    series: NH-A\n    melting:  ", "category: gX\n    series: NH-A\n    melting:  "),
+    "fuse-energy-currents-fall": FUSE_PAIR.replace("[[3.5, 147000], [10, 160000], [50, 190000]]", "[[3.5, 147000], [2, 160000]]"),
+    "mcb-let-through-not-pair": BASE.replace("devices:\n", "devices:\n  - {id: M1, type: mcb, curve_type: B, rating_a: 16,"
+        " let_through_i2t: [[1, 5000], [3]]}\n"),
+    "cable-non-adiabatic-medium-voltage": BASE.replace("size_mm2: 70", "size_mm2: 70\n    voltage_kv: 11\n    method: non-adiabatic"),
+    "cable-icea-without-temperatures": BASE.replace("insulation: xlpe", "insulation: rubber-60\n    method: icea"),
+    "check-dc-offset-kappa-and-x-r": BASE.replace("margin_s: 0.1}", "margin_s: 0.1, dc_offset: {kappa: 1.8, x_r: 10}}"),
+    "check-dc-offset-word": BASE.replace("margin_s: 0.1}", "margin_s: 0.1, dc_offset: off}"),
+    "grading-interval-to-unknown": BASE.replace("checks:\n", "  - id: R0\n    type: relay\n    stages:\n      - {curve: iec-very-inverse, pickup_a: 600, tms: 0.4}\nchecks:\n")
+        + "  - {upstream: R0, downstream: R1, interval_s: 0.3, interval_to: clearing, range_ka: {min: 1.5, max: 12}}\n",
     "relay-hold-bad-multiple": BASE.replace("tms: 0.2}", "tms: 0.2, high_current: hold, upper_multiple: 1}"),
     "fuse-rising-curve": HEAD.format(title="Rising fuse", kv=0.4) + "devices:\n  - id: F1\n    type: fuse\n    rating_a: 100\n"
         "    melting: [[200, 100], [400, 10], [800, 1]]\n    clearing: [[200, 120], [400, 12], [800, 30]]\n",

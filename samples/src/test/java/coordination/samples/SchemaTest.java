@@ -89,6 +89,7 @@ class SchemaTest {
             java.util.Map.entry("empty-file", "there is no document to validate"),
             java.util.Map.entry("fuse-clearing-below-melting", "compares two curves point by point"),
             java.util.Map.entry("fuse-rising-curve", "an order between list items"),
+            java.util.Map.entry("fuse-energy-currents-fall", "an order between list items"),
             java.util.Map.entry("grading-ratio-on-relays", "depends on the kinds of the devices the check names"),
             java.util.Map.entry("relay-multiplier-outside-range", "relates a setting to its stated range"),
             java.util.Map.entry("syntax-error", "not YAML"),

@@ -90,6 +90,35 @@ public enum Insulation {
     }
 
     /**
+     * The conductor temperature at rated current that ICEA P-32-382 takes for this insulation, where
+     * the library holds one: 75 °C for thermoplastic (PVC), 90 °C for XLPE and EPR (from memory).
+     * The ICEA method takes its own standard's temperatures, not IEC 60364-4-43's.
+     *
+     * @return °C, or empty where no ICEA value is held
+     */
+    public java.util.OptionalDouble iceaOperatingCelsius() {
+        return switch (this) {
+            case PVC, PVC_90 -> java.util.OptionalDouble.of(75);
+            case XLPE, EPR -> java.util.OptionalDouble.of(90);
+            default -> java.util.OptionalDouble.empty();
+        };
+    }
+
+    /**
+     * The short-circuit temperature ICEA P-32-382 takes for this insulation, where the library holds
+     * one: 150 °C for thermoplastic (PVC), 250 °C for XLPE and EPR (from memory).
+     *
+     * @return °C, or empty where no ICEA value is held
+     */
+    public java.util.OptionalDouble iceaShortCircuitCelsius() {
+        return switch (this) {
+            case PVC, PVC_90 -> java.util.OptionalDouble.of(150);
+            case XLPE, EPR -> java.util.OptionalDouble.of(250);
+            default -> java.util.OptionalDouble.empty();
+        };
+    }
+
+    /**
      * Finds an insulation by its study-file name.
      *
      * @param key the name

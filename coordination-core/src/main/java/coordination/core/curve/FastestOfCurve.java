@@ -58,7 +58,7 @@ public final class FastestOfCurve implements TimeCurrentCurve {
         double[] found = new double[stages.length * stages.length];
         int n = 0;
         for (TimeCurrentCurve a : stages) {
-            if (!(a instanceof InverseTimeStage inverse)) {
+            if (!(a instanceof Invertible inverse)) {
                 continue;
             }
             for (TimeCurrentCurve b : stages) {

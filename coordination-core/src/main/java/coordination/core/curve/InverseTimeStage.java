@@ -31,7 +31,7 @@ public record InverseTimeStage(
         SettingRange multiplierRange,
         HighCurrentBehaviour highCurrent,
         double upperMultiple,
-        String label) implements TimeCurrentCurve {
+        String label) implements RelayStage, Invertible {
 
     /** The upper multiple of pickup that IEC 60255-151 states for the curves (common practice: 20). */
     public static final double STANDARD_UPPER_MULTIPLE = 20.0;
@@ -71,14 +71,15 @@ public record InverseTimeStage(
      * @param family the standard curve
      * @param pickupAmps pickup current in amperes, above 0
      * @param multiplier TMS for IEC families, time dial for IEEE families, above 0
-     * @return the stage, with the kind's default setting range widened to the multiplier if need be
+     * @return the stage, with the kind's default setting range widened to the multiplier if need be,
+     *     and a band between following and holding above 20 times pickup
      * @throws IllegalArgumentException if a setting is out of range
      */
     public static InverseTimeStage of(InverseTimeFamily family, double pickupAmps, double multiplier) {
         MultiplierKind kind = family.multiplierKind();
         return new InverseTimeStage(family.aSeconds(), family.bSeconds(), family.exponent(), family.resetSeconds(),
-                pickupAmps, multiplier, kind, defaultRange(family.key(), kind, multiplier),
-                HighCurrentBehaviour.FOLLOW_EQUATION, STANDARD_UPPER_MULTIPLE, family.key());
+                pickupAmps, multiplier, kind, defaultRange(family.key(), kind, multiplier), HighCurrentBehaviour.BAND,
+                STANDARD_UPPER_MULTIPLE, family.key());
     }
 
     /**
@@ -90,14 +91,14 @@ public record InverseTimeStage(
      * @param pickupAmps pickup in amperes, above 0
      * @param kind whether the multiplier is a TMS or a time dial
      * @param multiplier the multiplier, above 0
-     * @return the stage, following the equation at all currents, with the kind's default range
+     * @return the stage, with a band between following and holding above 20 times pickup, and the
+     *     kind's default range
      * @throws IllegalArgumentException if a constant or setting is out of range
      */
     public static InverseTimeStage custom(double aSeconds, double bSeconds, double exponent, double pickupAmps,
             MultiplierKind kind, double multiplier) {
         return new InverseTimeStage(aSeconds, bSeconds, exponent, Double.NaN, pickupAmps, multiplier, kind,
-                defaultRange("custom", kind, multiplier), HighCurrentBehaviour.FOLLOW_EQUATION, STANDARD_UPPER_MULTIPLE,
-                "custom");
+                defaultRange("custom", kind, multiplier), HighCurrentBehaviour.BAND, STANDARD_UPPER_MULTIPLE, "custom");
     }
 
     private static SettingRange defaultRange(String label, MultiplierKind kind, double multiplier) {
@@ -154,6 +155,11 @@ public record InverseTimeStage(
                 multiplierKind, multiplierRange, highCurrent, upperMultiple, label);
     }
 
+    /**
+     * The operating time by the equation, held above the upper multiple when the stage holds. A
+     * {@link HighCurrentBehaviour#BAND} stage follows the equation here; a relay takes the band's
+     * edges through {@link #edge}.
+     */
     @Override
     public double seconds(double amps) {
         Curves.checkCurrent(amps);
@@ -167,6 +173,20 @@ public record InverseTimeStage(
         // expm1 keeps (M^p - 1) accurate for small p and M close to 1
         double denominator = Math.expm1(exponent * Math.log(m));
         return multiplier * (aSeconds / denominator + bSeconds);
+    }
+
+    @Override
+    public TimeCurrentCurve edge(Edge edge, RelayTolerance tolerance) {
+        InverseTimeStage s = this;
+        if (highCurrent == HighCurrentBehaviour.BAND) {
+            s = withHighCurrent(edge == Edge.FAST ? HighCurrentBehaviour.FOLLOW_EQUATION
+                    : HighCurrentBehaviour.HOLD_AT_UPPER_MULTIPLE, upperMultiple);
+        }
+        if (tolerance.pickupFraction() > 0) {
+            s = s.withPickupAmps(tolerance.pickupAmps(pickupAmps, edge));
+        }
+        return tolerance.timeFraction() > 0 || tolerance.timeMinSeconds() > 0 ? new TolerancedInverse(s, tolerance, edge)
+                : s;
     }
 
     /**
@@ -199,6 +219,7 @@ public record InverseTimeStage(
      * @return current in amperes, or NaN where no current gives that time (at or below the
      *     asymptote {@code M * B}, or inside a held region's flat time)
      */
+    @Override
     public double currentAtSeconds(double seconds) {
         double reduced = seconds / multiplier - bSeconds;
         if (!(reduced > 0) || Double.isInfinite(seconds)) {
@@ -213,7 +234,7 @@ public record InverseTimeStage(
 
     @Override
     public double[] breakpointsAmps() {
-        if (highCurrent == HighCurrentBehaviour.HOLD_AT_UPPER_MULTIPLE) {
+        if (highCurrent != HighCurrentBehaviour.FOLLOW_EQUATION) {
             return new double[] {pickupAmps, pickupAmps * upperMultiple};
         }
         return new double[] {pickupAmps};

@@ -1,6 +1,7 @@
 package coordination.core.curve;
 
 import coordination.core.internal.Checks;
+import java.util.Optional;
 
 /**
  * A miniature circuit breaker to IEC 60898-1:2015, its band built from the time-current points of
@@ -19,18 +20,18 @@ import coordination.core.internal.Checks;
  *
  * The standard sets no lower limit on the instantaneous clearing time; the fastest clearing time is
  * a parameter ({@link #DEFAULT_FASTEST_SECONDS} unless stated). Where the maker states the
- * breaker's let-through energy I²t (energy-limiting breakers), the maximum curve in the
- * instantaneous region is {@code min(0.1 s, I²t / I²)}, the time a steady current would need to
- * let the same energy through.
+ * breaker's let-through energy I²t (energy-limiting breakers, IEC 60898-1 energy limiting classes),
+ * a cable check compares that energy with k²S² from the type's upper instantaneous multiple up;
+ * the maximum curve stays at the standard's 0.1 s, the slowest clearing a grading check may assume.
  *
  * @param id identifier
  * @param type the instantaneous tripping type
  * @param ratedAmps rated current In in amperes, above 0
  * @param fastestSeconds fastest clearing time in the instantaneous region, from 0 to 0.1 s
- * @param letThroughI2tA2s the maker's let-through I²t in A²s, or NaN if none is stated
+ * @param letThrough the maker's let-through energy against prospective current, or empty
  */
 public record MiniatureBreaker(String id, McbType type, double ratedAmps, double fastestSeconds,
-        double letThroughI2tA2s) implements ProtectiveDevice {
+        Optional<LetThroughEnergy> letThrough) implements ProtectiveDevice {
 
     /** Fastest instantaneous clearing time assumed when none is stated: 5 ms, a quarter cycle at 50 Hz. */
     public static final double DEFAULT_FASTEST_SECONDS = 0.005;
@@ -49,9 +50,7 @@ public record MiniatureBreaker(String id, McbType type, double ratedAmps, double
         Checks.given("mcb: id", id);
         Checks.positive("mcb '" + id + "': rating", ratedAmps, "A");
         Checks.inRange("mcb '" + id + "': fastest clearing time", fastestSeconds, 0.0, INSTANTANEOUS_LIMIT_SECONDS, "s");
-        if (!Double.isNaN(letThroughI2tA2s)) {
-            Checks.positive("mcb '" + id + "': let-through I2t", letThroughI2tA2s, "A2s");
-        }
+        Checks.given("mcb '" + id + "': let-through energy", letThrough);
         if (type == null) {
             throw new IllegalArgumentException("mcb '" + id + "': type: found null - must be B, C or D");
         }
@@ -66,7 +65,13 @@ public record MiniatureBreaker(String id, McbType type, double ratedAmps, double
      * @return the breaker
      */
     public static MiniatureBreaker of(String id, McbType type, double ratedAmps) {
-        return new MiniatureBreaker(id, type, ratedAmps, DEFAULT_FASTEST_SECONDS, Double.NaN);
+        return new MiniatureBreaker(id, type, ratedAmps, DEFAULT_FASTEST_SECONDS, Optional.empty());
+    }
+
+    /** @return the upper instantaneous multiple times In: from here the breaker clears within 0.1 s */
+    @Override
+    public double letThroughFromAmps() {
+        return type.highMultiple() * ratedAmps;
     }
 
     @Override
@@ -103,9 +108,7 @@ public record MiniatureBreaker(String id, McbType type, double ratedAmps, double
                 return Double.POSITIVE_INFINITY;
             }
             if (maximum && m >= mcb.type.highMultiple()) {
-                double energyTime = Double.isNaN(mcb.letThroughI2tA2s) ? Double.POSITIVE_INFINITY
-                        : mcb.letThroughI2tA2s / (amps * amps);
-                return Math.min(INSTANTANEOUS_LIMIT_SECONDS, Math.max(energyTime, mcb.fastestSeconds));
+                return INSTANTANEOUS_LIMIT_SECONDS;
             }
             if (!maximum && m >= mcb.type.lowMultiple()) {
                 return mcb.fastestSeconds;
@@ -125,12 +128,7 @@ public record MiniatureBreaker(String id, McbType type, double ratedAmps, double
         public double[] breakpointsAmps() {
             double in = mcb.ratedAmps;
             if (maximum) {
-                double high = mcb.type.highMultiple() * in;
-                double energyKnee = Math.sqrt(mcb.letThroughI2tA2s / INSTANTANEOUS_LIMIT_SECONDS);
-                double energyFloor = Math.sqrt(mcb.letThroughI2tA2s / Math.max(mcb.fastestSeconds, 1e-9));
-                return Curves.union(new double[] {1.45 * in, KNEE_MULTIPLE * in, high},
-                        Double.isNaN(energyKnee) || energyKnee <= high ? new double[0] : new double[] {energyKnee},
-                        Double.isNaN(energyFloor) || energyFloor <= high ? new double[0] : new double[] {energyFloor});
+                return new double[] {1.45 * in, KNEE_MULTIPLE * in, mcb.type.highMultiple() * in};
             }
             // where the constant-I²t part meets the 0.1 s floor, if that lies before the step
             double floorAt = KNEE_MULTIPLE * Math.sqrt(1.0 / INSTANTANEOUS_LIMIT_SECONDS);

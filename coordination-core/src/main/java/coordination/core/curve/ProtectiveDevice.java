@@ -1,6 +1,6 @@
 package coordination.core.curve;
 
-import java.util.OptionalDouble;
+import java.util.Optional;
 
 /**
  * A protective device seen through its time-current band: the minimum curve (fastest: a fuse's
@@ -25,13 +25,40 @@ public interface ProtectiveDevice {
     TimeCurrentCurve maximumCurve();
 
     /**
-     * Total let-through energy the device's maker states for currents above its digitised
-     * clearing curve, where the curve has no value (current-limiting fuses).
+     * The slow edge of the device's operating time, the curve a coordination time interval between
+     * relays is measured from: for a relay, its operating time without the breaker's interrupting
+     * time (IEEE 242 practice); for fuses and breakers, their total clearing time.
      *
-     * @return I²t in A²s, or empty if none is stated
+     * @return the curve, never below {@link #minimumCurve()}
      */
-    default OptionalDouble clearingI2tA2s() {
-        return OptionalDouble.empty();
+    default TimeCurrentCurve slowestOperatingCurve() {
+        return maximumCurve();
+    }
+
+    /**
+     * The total let-through energy the device's maker states, against prospective current: used
+     * for cable checks where the device limits the current (clearing within 0.1 s, or beyond its
+     * digitised curve) from {@link #letThroughFromAmps()} up.
+     *
+     * @return the energy, or empty if none is stated
+     */
+    default Optional<LetThroughEnergy> letThrough() {
+        return Optional.empty();
+    }
+
+    /** @return the lowest prospective current, in amperes, at which {@link #letThrough()} applies */
+    default double letThroughFromAmps() {
+        return 0.0;
+    }
+
+    /**
+     * The pre-arcing energy a fuse's maker states, against prospective current: what an upstream
+     * fuse withstands without melting in the current-limiting region.
+     *
+     * @return the energy, or empty if none is stated
+     */
+    default Optional<LetThroughEnergy> preArcing() {
+        return Optional.empty();
     }
 
     /**
@@ -47,9 +74,8 @@ public interface ProtectiveDevice {
         if (factor == 1.0) {
             return this;
         }
-        OptionalDouble i2t = clearingI2tA2s();
-        OptionalDouble scaled = i2t.isPresent() ? OptionalDouble.of(i2t.getAsDouble() * factor * factor) : i2t;
         return new BandDevice(id(), kind(), minimumCurve().scaledCurrent(factor), maximumCurve().scaledCurrent(factor),
-                scaled);
+                slowestOperatingCurve().scaledCurrent(factor), letThrough().map(e -> e.scaled(factor)),
+                letThroughFromAmps() * factor, preArcing().map(e -> e.scaled(factor)), this);
     }
 }

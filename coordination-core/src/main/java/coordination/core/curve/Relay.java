@@ -7,11 +7,15 @@ import java.util.Optional;
 
 /**
  * An overcurrent relay and its circuit breaker: several stages acting together (the fastest wins),
- * an optional current-transformer ratio and an optional breaker interrupting time.
+ * an optional current-transformer ratio, an optional breaker interrupting time and the relay's
+ * stated accuracy.
  *
  * <p>With a CT ratio, stage pickups are relay settings in secondary amperes and are referred to the
- * primary by multiplying with {@code primaryAmps / secondaryAmps}. The minimum curve is the relay's
- * operating time; the maximum curve adds the breaker's interrupting time to give the clearing time.
+ * primary by multiplying with {@code primaryAmps / secondaryAmps}. Every stage has a fast and a slow
+ * edge ({@link RelayStage#edge}): the tolerance, the band above an inverse stage's effective range,
+ * an assumed instantaneous operating time. The minimum curve is the fast edge of the operating
+ * time; {@link #slowestOperatingCurve()} the slow edge; the maximum curve adds the breaker's
+ * interrupting time to the slow edge to give the clearing time.
  */
 public final class Relay implements ProtectiveDevice {
     private final String id;
@@ -19,7 +23,9 @@ public final class Relay implements ProtectiveDevice {
     private final Optional<CurrentTransformer> ct;
     private final double ctRatio;
     private final double breakerSeconds;
-    private final TimeCurrentCurve operating;
+    private final RelayTolerance tolerance;
+    private final TimeCurrentCurve fastOperating;
+    private final TimeCurrentCurve slowOperating;
     private final TimeCurrentCurve clearing;
 
     /**
@@ -46,21 +52,43 @@ public final class Relay implements ProtectiveDevice {
      */
     public Relay(String id, List<? extends TimeCurrentCurve> stages, Optional<CurrentTransformer> ct,
             double breakerSeconds) {
+        this(id, stages, ct, breakerSeconds, RelayTolerance.NONE);
+    }
+
+    /**
+     * Creates a relay with a stated accuracy.
+     *
+     * @param id identifier
+     * @param stages one or more stages, settings in secondary amperes when a CT is given
+     * @param ct the current transformer, or empty when the settings are primary amperes
+     * @param breakerSeconds breaker interrupting time in seconds, 0 or more
+     * @param tolerance the relay's accuracy, or {@link RelayTolerance#NONE} when not stated
+     * @throws IllegalArgumentException if an argument is missing, no stage is given or a time is out of range
+     */
+    public Relay(String id, List<? extends TimeCurrentCurve> stages, Optional<CurrentTransformer> ct,
+            double breakerSeconds, RelayTolerance tolerance) {
         if (id == null || stages == null || ct == null) {
             throw new IllegalArgumentException("relay: found a null id, stage list or CT - each must be given");
         }
         this.id = id;
         Checks.nonNegative("relay '" + id + "': breaker interrupting time", breakerSeconds, "s");
+        this.tolerance = Checks.given("relay '" + id + "': tolerance", tolerance);
         this.stages = List.copyOf(stages);
         this.ct = ct;
         this.ctRatio = ct.map(CurrentTransformer::ratio).orElse(1.0);
         this.breakerSeconds = breakerSeconds;
+        this.fastOperating = new FastestOfCurve("relay '" + id + "' fast edge", edges(Edge.FAST));
+        this.slowOperating = new FastestOfCurve("relay '" + id + "'", edges(Edge.SLOW));
+        this.clearing = slowOperating.delayedBy(breakerSeconds);
+    }
+
+    private List<TimeCurrentCurve> edges(Edge edge) {
         List<TimeCurrentCurve> primary = new ArrayList<>();
         for (TimeCurrentCurve s : stages) {
-            primary.add(s.scaledCurrent(ctRatio));
+            TimeCurrentCurve e = s instanceof RelayStage r ? r.edge(edge, tolerance) : s;
+            primary.add(e.scaledCurrent(ctRatio));
         }
-        this.operating = new FastestOfCurve("relay '" + id + "'", primary);
-        this.clearing = operating.delayedBy(breakerSeconds);
+        return primary;
     }
 
     private static Optional<CurrentTransformer> ratioOnly(String id, double ctRatio) {
@@ -86,7 +114,7 @@ public final class Relay implements ProtectiveDevice {
      * @return the new relay
      */
     public Relay withBreakerSeconds(double seconds) {
-        return new Relay(id, stages, ct, seconds);
+        return new Relay(id, stages, ct, seconds, tolerance);
     }
 
     /**
@@ -96,7 +124,7 @@ public final class Relay implements ProtectiveDevice {
      * @return the new relay
      */
     public Relay withStages(List<? extends TimeCurrentCurve> newStages) {
-        return new Relay(id, newStages, ct, breakerSeconds);
+        return new Relay(id, newStages, ct, breakerSeconds, tolerance);
     }
 
     @Override
@@ -129,9 +157,30 @@ public final class Relay implements ProtectiveDevice {
         return breakerSeconds;
     }
 
+    /** @return the relay's stated accuracy, {@link RelayTolerance#NONE} when not stated */
+    public RelayTolerance tolerance() {
+        return tolerance;
+    }
+
+    /**
+     * This relay with a stated accuracy.
+     *
+     * @param newTolerance the accuracy
+     * @return the new relay
+     */
+    public Relay withTolerance(RelayTolerance newTolerance) {
+        return new Relay(id, stages, ct, breakerSeconds, newTolerance);
+    }
+
     @Override
     public TimeCurrentCurve minimumCurve() {
-        return operating;
+        return fastOperating;
+    }
+
+    /** @return the slow edge of the operating time, without the breaker's interrupting time */
+    @Override
+    public TimeCurrentCurve slowestOperatingCurve() {
+        return slowOperating;
     }
 
     @Override

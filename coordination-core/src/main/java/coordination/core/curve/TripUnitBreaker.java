@@ -11,12 +11,20 @@ import coordination.core.internal.Checks;
  * long-time region is {@code t = tr * (6 Ir)² / I²}. The long-time band runs from the conventional
  * non-tripping to the conventional tripping current of IEC 60947-2, Table 6 (1.05 Ir and 1.30 Ir,
  * from memory). The short-time ramp, when on, has constant I²t through the point (10 Ir, tsd)
- * (common practice). Times and short-time/instantaneous pickups spread by the stated tolerances.
+ * (common practice). Times and short-time/instantaneous pickups spread by the stated tolerances;
+ * without a stated pickup tolerance, the +/-20 % of IEC 60947-2 (a release trips at 120 % of its
+ * setting at most, and not below 80 %).
  *
  * @param id identifier
  * @param settings the trip unit's settings
  */
 public record TripUnitBreaker(String id, Settings settings) implements ProtectiveDevice {
+
+    /**
+     * Pickup tolerance of short-time and instantaneous releases where none is stated: the +/-20 % that
+     * IEC 60947-2 allows (from memory). A maker's tighter figure may be stated instead.
+     */
+    public static final double DEFAULT_PICKUP_TOLERANCE = 0.20;
 
     /** Multiple of Ir at which tr is stated (common practice). */
     public static final double LONG_TIME_REFERENCE_MULTIPLE = 6.0;
@@ -79,7 +87,7 @@ public record TripUnitBreaker(String id, Settings settings) implements Protectiv
 
         /**
          * Settings with the tolerances stated in the class documentation (band 1.05 to 1.30 Ir,
-         * ±10 % on Isd and Ii, ±20 % on times) and an instantaneous clearing band of 10 ms to 50 ms.
+         * ±20 % on Isd and Ii, ±20 % on times) and an instantaneous clearing band of 10 ms to 50 ms.
          *
          * @param irAmps Ir in amperes
          * @param trSeconds tr at 6 Ir in seconds
@@ -92,7 +100,7 @@ public record TripUnitBreaker(String id, Settings settings) implements Protectiv
         public static Settings of(double irAmps, double trSeconds, double isdAmps, double tsdSeconds,
                 boolean shortTimeI2t, double iiAmps) {
             return new Settings(irAmps, trSeconds, isdAmps, tsdSeconds, shortTimeI2t, iiAmps, 0.01, 0.05, 1.05, 1.30,
-                    0.10, 0.20);
+                    DEFAULT_PICKUP_TOLERANCE, 0.20);
         }
     }
 

@@ -90,7 +90,8 @@ public final class MinimumConductor {
     }
 
     static CableThermalLimit sized(CableThermalLimit t, boolean defaults, double mm2) {
-        if (!defaults) {
+        // ICEA's short-circuit temperatures do not depend on the size
+        if (!defaults || t.method() == ThermalMethod.ICEA) {
             return t.withSizeMm2(mm2);
         }
         Insulation ins = t.insulation();

@@ -29,9 +29,14 @@ public final class SegmentWalk {
             return Math.exp(0.5 * (xa + xb));
         }
 
-        /** @return the current at the upper evaluated end, in amperes */
+        /**
+         * The current at the upper evaluated end, in amperes: the range's end itself on the last
+         * segment, where exp(ln b) could round past the end of a curve that stops there.
+         *
+         * @return amperes
+         */
         public double rightAmps() {
-            return Math.exp(xb);
+            return last ? b : Math.exp(xb);
         }
 
         /**

@@ -2,6 +2,7 @@ package coordination.core.margin;
 
 import coordination.core.cable.CableThermalLimit;
 import coordination.core.cable.ThermalMethod;
+import coordination.core.curve.LetThroughEnergy;
 import coordination.core.curve.ProtectiveDevice;
 import coordination.core.curve.TimeCurrentCurve;
 import coordination.core.internal.Checks;
@@ -11,7 +12,6 @@ import coordination.core.internal.SmoothScan;
 import java.util.ArrayList;
 import java.util.Arrays;
 import java.util.List;
-import java.util.OptionalDouble;
 import java.util.function.DoubleUnaryOperator;
 
 /**
@@ -26,11 +26,14 @@ import java.util.function.DoubleUnaryOperator;
  * of the device curve both one-sided limits are compared, so a minimum at a step is reported at the
  * step with the side on which it occurs.
  *
- * <p>Below 0.1 s the comparison is of let-through energy, I² t_device against k²S², which on
- * these axes is the same comparison; with a {@link DcOffset} the device's time there is increased
- * to the thermally equivalent {@code (1 + m) t} of IEC 60909-0. Above the device's digitised range,
- * a fuse's stated clearing I²t is used as constant let-through energy. Above 5 s the adiabatic
- * limit is conservative and reported as such, unless the cable uses the non-adiabatic method.
+ * <p>The comparison is of heating: with a {@link DcOffset} the device's time is increased at every
+ * duration to the thermally equivalent {@code (1 + m) t} of IEC 60909-0, the heating of the decaying
+ * DC component. Below 0.1 s it is the comparison of let-through energy, I² t_device against k²S².
+ * Where the device's maker states its let-through energy (a current-limiting fuse beyond its
+ * digitised curve or wherever it clears within 0.1 s, an energy-limiting breaker above its
+ * instantaneous multiple), that energy is compared with k²S² directly, without the DC-offset
+ * factor, which the maker's figure already contains. Above 5 s the adiabatic limit is
+ * conservative and reported as such; the non-adiabatic method credits heat loss only up to 5 s.
  */
 public final class CableCheck {
     private static final double[] WINDOW_EDGES_SECONDS = {CableThermalLimit.ADIABATIC_MIN_SECONDS,
@@ -43,7 +46,8 @@ public final class CableCheck {
     private final MarginRequirement requirement;
     private final DcOffset dcOffset;
     private final TimeCurrentCurve curve;
-    private final double letThrough;
+    private final LetThroughEnergy letThrough;
+    private final double letThroughFrom;
     private final double adiabaticI2t;
     private final CableCheckResult result;
 
@@ -55,7 +59,7 @@ public final class CableCheck {
      * @param fromAmps lowest prospective fault current in amperes, above 0
      * @param toAmps highest prospective fault current in amperes, at or above {@code fromAmps}
      * @param requirement the margin asked for
-     * @param dcOffset DC-offset heating below 0.1 s, or null to ignore it
+     * @param dcOffset DC-offset heating, or null to leave it out
      * @throws IllegalArgumentException if the range is invalid
      */
     public CableCheck(ProtectiveDevice device, CableThermalLimit cable, double fromAmps, double toAmps,
@@ -71,8 +75,8 @@ public final class CableCheck {
         this.requirement = requirement;
         this.dcOffset = dcOffset;
         this.curve = device.maximumCurve();
-        OptionalDouble i2t = device.clearingI2tA2s();
-        this.letThrough = i2t.isPresent() ? i2t.getAsDouble() : Double.NaN;
+        this.letThrough = device.letThrough().orElse(null);
+        this.letThroughFrom = device.letThroughFromAmps();
         this.adiabaticI2t = cable.method() == ThermalMethod.NON_ADIABATIC ? Double.NaN : cable.i2tA2s();
         this.result = compute();
     }
@@ -98,31 +102,56 @@ public final class CableCheck {
     }
 
     /**
-     * Device clearing time at a current, with the stated let-through energy above a digitised range.
+     * The device's clearing time from its curve.
+     *
+     * @param amps current in amperes
+     * @return seconds, infinity where it does not clear, NaN where the curve has no value
+     */
+    public double curveSeconds(double amps) {
+        return curve.isDefinedAt(amps) ? curve.seconds(amps) : Double.NaN;
+    }
+
+    /**
+     * Whether the maker's let-through energy decides the check at a current: it is stated there,
+     * and the device limits the current (clears within 0.1 s, or lies beyond its digitised curve).
+     *
+     * @param amps current in amperes
+     * @return true where the let-through energy is compared with k²S²
+     */
+    public boolean usesLetThrough(double amps) {
+        if (letThrough == null || amps < letThroughFrom || !letThrough.isDefinedAt(amps)) {
+            return false;
+        }
+        if (curve.isDefinedAt(amps)) {
+            return curve.seconds(amps) <= CableThermalLimit.ADIABATIC_MIN_SECONDS;
+        }
+        return amps > curve.highestDefinedAmps();
+    }
+
+    /**
+     * The device's clearing time, or where its let-through energy decides, the time a steady
+     * current needs to let that energy through.
      *
      * @param amps current in amperes
      * @return seconds, infinity where it does not clear, NaN where it has no value
      */
     public double deviceSeconds(double amps) {
-        if (curve.isDefinedAt(amps)) {
-            return curve.seconds(amps);
-        }
-        if (amps > curve.highestDefinedAmps() && !Double.isNaN(letThrough)) {
-            return letThrough / (amps * amps);
-        }
-        return Double.NaN;
+        return usesLetThrough(amps) ? letThrough.a2s(amps) / (amps * amps) : curveSeconds(amps);
     }
 
     /**
-     * The device's thermally equivalent time: its clearing time, increased below 0.1 s by the
-     * DC-offset factor when one is given.
+     * The device's thermally equivalent time: its clearing time times {@code (1 + m)} for the
+     * DC-offset heating when one is given; the let-through time as it is.
      *
      * @param amps current in amperes
      * @return seconds
      */
     public double equivalentSeconds(double amps) {
-        double t = deviceSeconds(amps);
-        if (dcOffset != null && t > 0 && t < CableThermalLimit.ADIABATIC_MIN_SECONDS) {
+        if (usesLetThrough(amps)) {
+            return letThrough.a2s(amps) / (amps * amps);
+        }
+        double t = curveSeconds(amps);
+        if (dcOffset != null && t > 0 && Double.isFinite(t)) {
             return t * (1 + dcOffset.m(t));
         }
         return t;
@@ -156,7 +185,7 @@ public final class CableCheck {
                 scan.interrupt(Double.NEGATIVE_INFINITY);
                 return;
             }
-            addRegion(regions, s.a(), s.b(), method(tMid));
+            addRegion(regions, s.a(), s.b(), method(s.midAmps(), tMid));
             SegmentWalk.Segment seg = s;
             // a pole can only sit where the device starts to operate: at the range start or after a gap
             boolean afterGap = s.first() || scan.previous() == Double.NEGATIVE_INFINITY;
@@ -174,10 +203,11 @@ public final class CableCheck {
             ratio.offer(minima[1], seg);
         });
         boolean clearsEverywhere = notCleared.isEmpty() && undefined.isEmpty();
-        boolean pass = clearsEverywhere && !Double.isNaN(margin.value())
-                && requirement.isMetBy(margin.value(), Math.exp(ratio.value()));
+        // no finite minimum where the device does not clear or slows without bound: both say so
+        double minRatio = ratio.value() == Double.NEGATIVE_INFINITY ? Double.NaN : Math.exp(ratio.value());
+        boolean pass = clearsEverywhere && !Double.isNaN(margin.value()) && requirement.isMetBy(margin.value(), minRatio);
         return new CableCheckResult(device.id(), cable.id(), fromAmps, toAmps, requirement, pass, margin.value(),
-                margin.at(), margin.side(), Math.exp(ratio.value()), ratio.at(), ratio.side(), scan.crossingsAmps(),
+                margin.at(), margin.side(), minRatio, ratio.at(), ratio.side(), scan.crossingsAmps(),
                 notCleared.from(), notCleared.to(), undefined.from(), undefined.to(), regions);
     }
 
@@ -207,7 +237,10 @@ public final class CableCheck {
         return Math.log(cableSeconds(amps) / te);
     }
 
-    private String method(double deviceSeconds) {
+    private String method(double amps, double deviceSeconds) {
+        if (usesLetThrough(amps)) {
+            return ThermalRegion.ENERGY_LET_THROUGH;
+        }
         if (deviceSeconds < CableThermalLimit.ADIABATIC_MIN_SECONDS) {
             return dcOffset != null ? ThermalRegion.ENERGY_DC_OFFSET : ThermalRegion.ENERGY;
         }
@@ -215,7 +248,7 @@ public final class CableCheck {
             return ThermalRegion.ICEA;
         }
         if (cable.method() == ThermalMethod.NON_ADIABATIC) {
-            return ThermalRegion.NON_ADIABATIC;
+            return cable.beyondNonAdiabaticScope(amps) ? ThermalRegion.OUTSIDE_IEC_60949 : ThermalRegion.NON_ADIABATIC;
         }
         return deviceSeconds > CableThermalLimit.ADIABATIC_MAX_SECONDS ? ThermalRegion.ADIABATIC_CONSERVATIVE
                 : ThermalRegion.ADIABATIC;
@@ -230,21 +263,23 @@ public final class CableCheck {
         }
     }
 
-    /** The range ends, the device's breakpoints inside, and the window edges. */
+    /** The range ends, the device's and the cable's breakpoints inside, the let-through's, and the window edges. */
     private double[] splitPoints() {
+        double[] energy = letThrough == null ? new double[0] : letThrough.breakpointsAmps();
         double[] base = LogAxis.splitPoints(fromAmps, toAmps, curve.breakpointsAmps(),
-                new double[] {curve.lowestDefinedAmps(), curve.highestDefinedAmps()});
+                new double[] {curve.lowestDefinedAmps(), curve.highestDefinedAmps(), letThroughFrom}, energy,
+                cable.breakpointsAmps());
         // window edges: where the clearing time passes 0.1 s and 5 s inside a smooth segment
         double[] edges = new double[2 * base.length];
         int[] m = {0};
         SegmentWalk.walk(base, s -> {
-            if (!(s.xb() > s.xa()) || Double.isNaN(deviceSeconds(s.midAmps()))) {
+            if (!(s.xb() > s.xa()) || Double.isNaN(curveSeconds(s.midAmps()))) {
                 return;
             }
             // the clearing time never rises with current, so each limit is passed at most once per segment
             for (double limit : WINDOW_EDGES_SECONDS) {
                 double logLimit = Math.log(limit);
-                double r = LogAxis.monotoneRoot(x -> Math.log(deviceSeconds(Math.exp(x))) - logLimit, s.xa(), s.xb());
+                double r = LogAxis.monotoneRoot(x -> Math.log(curveSeconds(Math.exp(x))) - logLimit, s.xa(), s.xb());
                 if (!Double.isNaN(r)) {
                     edges[m[0]++] = Math.exp(r);
                 }

@@ -8,14 +8,41 @@ import coordination.core.internal.Checks;
  *
  * <pre>m = 1 / (2 f T ln(κ - 1)) × (e^(4 f T ln(κ - 1)) - 1)</pre>
  *
- * With the AC factor n = 1 (far from generators) the fault heats the conductor as a steady current
- * for {@code (1 + m) T}. As κ approaches 2 the formula becomes 0/0; its limit, m = 2, is taken
- * there through {@code expm1(x)/x}.
+ * With the AC factor n = 1 (far from generators) the thermal equivalent current is
+ * {@code Ith = Ik'' √(m + n)}, so the fault heats the conductor as a steady current for
+ * {@code (1 + m) T}; this holds at every duration, and m falls towards 0 as T grows. As κ approaches
+ * 2 the formula becomes 0/0; its limit, m = 2, is taken there through {@code expm1(x)/x}.
  *
  * @param kappa peak factor κ of the fault current, above 1 and at most 2
  * @param frequencyHz system frequency in Hz, above 0
  */
 public record DcOffset(double kappa, double frequencyHz) {
+
+    /** The peak factor assumed where a study states neither κ nor X/R: 1.8 (common practice). */
+    public static final double ASSUMED_KAPPA = 1.8;
+
+    /**
+     * The peak factor of IEC 60909-0:2016, equation (55): {@code κ = 1.02 + 0.98 e^(-3R/X)}.
+     *
+     * @param xOverR the ratio X/R at the fault location, above 0
+     * @return κ, from 1.02 to 2
+     * @throws IllegalArgumentException if X/R is not a positive finite number
+     */
+    public static double kappa(double xOverR) {
+        Checks.positive("X/R", xOverR, "");
+        return 1.02 + 0.98 * Math.exp(-3.0 / xOverR);
+    }
+
+    /**
+     * DC-offset heating for a fault location's X/R.
+     *
+     * @param xOverR X/R, above 0
+     * @param frequencyHz system frequency in Hz
+     * @return the heating
+     */
+    public static DcOffset fromXOverR(double xOverR, double frequencyHz) {
+        return new DcOffset(kappa(xOverR), frequencyHz);
+    }
 
     /**
      * Validates the parameters.

@@ -3,9 +3,16 @@ package coordination.core.margin;
 import coordination.core.internal.Checks;
 
 /**
- * What a grading check asks of two devices in series: a coordination time interval between
- * relays (0.2 s to 0.4 s is common practice), a rating ratio between fuses (1.6:1 is a common rule of
- * thumb), or that the tolerance bands of two breakers do not overlap.
+ * What a grading check asks of two devices in series: a coordination time interval (CTI), a
+ * rating ratio between fuses (1.6:1 is a common rule of thumb for gG fuses of one series), or that
+ * the tolerance bands of two breakers do not overlap.
+ *
+ * <p>A CTI between two relays is measured between their operating times, as IEEE Std 242 and IEC
+ * practice do: the 0.3 s (electromechanical) or 0.2 s (static and numerical relays) of IEEE 242
+ * (from memory) already contains the downstream breaker's interrupting time. So the upstream
+ * relay's fastest operating time is compared with the downstream relay's slowest operating time.
+ * With any fuse or breaker in the pair, the interval is measured to the downstream device's total
+ * clearing time. {@link #intervalBetweenClearingTimes(double)} asks the stricter form explicitly.
  */
 public sealed interface GradingRequirement {
 
@@ -17,7 +24,18 @@ public sealed interface GradingRequirement {
      * @return the requirement
      */
     static GradingRequirement intervalSeconds(double seconds) {
-        return new Interval(seconds);
+        return new Interval(seconds, false);
+    }
+
+    /**
+     * A coordination time interval measured to the downstream device's clearing time even between
+     * relays: the stricter form, where the interval need not contain the breaker's time.
+     *
+     * @param seconds interval in seconds, 0 or more
+     * @return the requirement
+     */
+    static GradingRequirement intervalBetweenClearingTimes(double seconds) {
+        return new Interval(seconds, true);
     }
 
     /**
@@ -39,8 +57,10 @@ public sealed interface GradingRequirement {
      * A coordination time interval.
      *
      * @param seconds required interval in seconds, 0 or more
+     * @param toClearingTime whether a downstream relay is taken at its clearing time rather than
+     *     its operating time
      */
-    record Interval(double seconds) implements GradingRequirement {
+    record Interval(double seconds, boolean toClearingTime) implements GradingRequirement {
         /** @throws IllegalArgumentException if negative */
         public Interval {
             Checks.nonNegative("required interval", seconds, "s");
@@ -48,7 +68,7 @@ public sealed interface GradingRequirement {
 
         @Override
         public String toString() {
-            return Checks.format(seconds) + " s";
+            return Checks.format(seconds) + " s" + (toClearingTime ? " to the clearing time" : "");
         }
     }
 

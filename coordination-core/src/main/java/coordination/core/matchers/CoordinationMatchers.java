@@ -192,11 +192,13 @@ public final class CoordinationMatchers {
             }
             double probe = sided(r.minIntervalAtAmps(), r.minIntervalSide());
             double tu = upstream.minimumCurve().seconds(probe);
-            double td = downstream.maximumCurve().seconds(probe);
+            double td = (r.toOperatingTime() ? downstream.slowestOperatingCurve() : downstream.maximumCurve())
+                    .seconds(probe);
             Side side = r.minIntervalSide();
             mismatch.appendText("at " + Checks.format(r.minIntervalAtAmps()) + " A"
                     + (side == Side.AT ? "" : " (just " + side.key() + ")") + " '" + upstream.id()
-                    + "' operates in " + Checks.format(tu) + " s and '" + downstream.id() + "' clears in "
+                    + "' operates in " + Checks.format(tu) + " s and '" + downstream.id() + "' "
+                    + (r.toOperatingTime() ? "operates" : "clears") + " in "
                     + Checks.format(td) + " s: interval " + Checks.format(r.minIntervalSeconds()) + " s, "
                     + Checks.format(r.requiredSeconds() - r.minIntervalSeconds()) + " s short of " + requirement);
             return false;

@@ -437,14 +437,34 @@ final class Binder {
 
     private static final NumberField RANGE_MIN = NumberField.number("min", "kA").above(0).to(1e4).required();
     private static final NumberField RANGE_MAX = NumberField.number("max", "kA").above(0).to(1e4).required();
-    private static final NumberField POINT_AMPS = NumberField.number("", "A").above(0).required();
-    private static final NumberField POINT_SECONDS = NumberField.number("", "s").above(0).required();
+    /**
+     * What the two numbers of a point are.
+     *
+     * @param words how a message names a point, e.g. {@code [current A, time s]}
+     * @param x the first number
+     * @param y the second number
+     */
+    record PointForm(String words, NumberField x, NumberField y) {
+    }
+
+    /** Points of a digitised time-current curve. */
+    static final PointForm TIME_POINTS = new PointForm("[current A, time s]",
+            NumberField.number("", "A").above(0).required(), NumberField.number("", "s").above(0).required());
+    /** Points of an energy against prospective current. */
+    static final PointForm ENERGY_POINTS = new PointForm("[prospective current kA, energy A2s]",
+            NumberField.number("", "kA").above(0).to(1e4).required(),
+            NumberField.number("", "A2s").above(0).to(1e12).required());
 
     /** A list of [current A, time s] pairs as {amps, seconds}; empty if missing or invalid. */
     Optional<double[][]> points(Node.MapNode m, String path, String key, int maxPoints) {
+        return points(m, path, key, maxPoints, TIME_POINTS);
+    }
+
+    /** A list of pairs of a form, as {first numbers, second numbers}; empty if missing or invalid. */
+    Optional<double[][]> points(Node.MapNode m, String path, String key, int maxPoints, PointForm form) {
         Node n = value(m, key);
         if (n == null) {
-            missing(m, path, key, "a list of [current A, time s] points");
+            missing(m, path, key, "a list of " + form.words() + " points");
             return Optional.empty();
         }
         String p = join(path, key);
@@ -468,13 +488,13 @@ final class Binder {
             String ip = p + "[" + i + "]";
             List<Node> pair = items.get(i) instanceof Node.ListNode l ? l.items() : null;
             if (pair == null || pair.size() != 2) {
-                problem(items.get(i), ip, "expected a point [current A, time s], found "
+                problem(items.get(i), ip, "expected a point " + form.words() + ", found "
                         + (items.get(i) == null ? "nothing" : pair == null ? items.get(i).kindName()
                         : "a list of " + pair.size()));
                 continue;
             }
-            amps[i] = number(pair.get(0), ip + "[0]", POINT_AMPS).orElse(0);
-            secs[i] = number(pair.get(1), ip + "[1]", POINT_SECONDS).orElse(0);
+            amps[i] = number(pair.get(0), ip + "[0]", form.x()).orElse(0);
+            secs[i] = number(pair.get(1), ip + "[1]", form.y()).orElse(0);
         }
         return problemCount() > before ? Optional.empty() : Optional.of(new double[][] {amps, secs});
     }

@@ -5,6 +5,7 @@ import coordination.core.cable.WithstandTable;
 import coordination.core.curve.DefiniteTimeStage;
 import coordination.core.curve.Fuse;
 import coordination.core.curve.InverseTimeStage;
+import coordination.core.curve.LetThroughEnergy;
 import coordination.core.curve.MiniatureBreaker;
 import coordination.core.curve.ProtectiveDevice;
 import coordination.core.curve.Relay;
@@ -66,7 +67,7 @@ public final class ReportWriter {
      */
     public static String write(CheckResult result) {
         JsonOut j = new JsonOut();
-        check(j, result);
+        check(j, result, new StudyReport.CheckNotes(List.of(), List.of()));
         return j.finish();
     }
 
@@ -134,8 +135,8 @@ public final class ReportWriter {
                 .number("reference_voltage_kv", study.voltageKv()).number("frequency_hz", study.frequencyHz())
                 .bool("pass", report.pass());
         j.startArray("checks");
-        for (CheckResult r : report.results()) {
-            check(j, r);
+        for (int i = 0; i < report.results().size(); i++) {
+            check(j, report.results().get(i), report.notes().get(i));
         }
         j.endArray().startArray("cables");
         for (Study.StudyCable c : study.cables()) {
@@ -145,15 +146,28 @@ public final class ReportWriter {
         for (Study.StudyDevice d : study.devices()) {
             device(j, d);
         }
-        j.endArray().endObject();
+        j.endArray();
+        notes(j, "warnings", report.warnings());
+        j.endObject();
     }
 
-    private static void check(JsonOut j, CheckResult result) {
+    private static void check(JsonOut j, CheckResult result, StudyReport.CheckNotes notes) {
         if (result instanceof CableCheckResult c) {
             cableCheck(j, c);
         } else if (result instanceof GradingCheckResult g) {
             gradingCheck(j, g);
         }
+        notes(j, "assumptions", notes.assumptions());
+        notes(j, "warnings", notes.warnings());
+        j.endObject();
+    }
+
+    private static void notes(JsonOut j, String key, List<Note> notes) {
+        j.startArray(key);
+        for (Note n : notes) {
+            j.startObject().text("code", n.code()).text("message", n.message()).endObject();
+        }
+        j.endArray();
     }
 
     private static void cableCheck(JsonOut j, CableCheckResult r) {
@@ -175,13 +189,16 @@ public final class ReportWriter {
             j.startObject().number("from_a", region.fromAmps()).number("to_a", region.toAmps())
                     .text("method", region.method()).endObject();
         }
-        j.endArray().text("reason", r.reason()).endObject();
+        j.endArray().text("reason", r.reason());
     }
 
     private static void gradingCheck(JsonOut j, GradingCheckResult r) {
         j.startObject().text("kind", "grading").text("upstream", r.upstream()).text("downstream", r.downstream())
                 .bool("pass", r.pass()).pair("range_a", r.fromAmps(), r.toAmps())
                 .number("required_s", r.requiredSeconds());
+        if (r.requirement() instanceof GradingRequirement.Interval) {
+            j.text("interval_to", r.toOperatingTime() ? "operating-time" : "clearing-time");
+        }
         if (r.requirement() instanceof GradingRequirement.RatingRatio ratio) {
             j.number("required_rating_ratio", ratio.ratio()).number("rating_ratio", r.ratingRatio());
         }
@@ -191,8 +208,10 @@ public final class ReportWriter {
         j.number("min_interval_s", r.minIntervalSeconds()).number("min_interval_at_a", r.minIntervalAtAmps())
                 .text("min_interval_side", Double.isNaN(r.minIntervalAtAmps()) ? null : r.minIntervalSide().key())
                 .numbers("crossings_a", r.crossingsAmps());
+        span(j, "energy_a", r.energyFromAmps(), r.energyToAmps());
+        j.number("min_energy_ratio", r.minEnergyRatio()).number("min_energy_ratio_at_a", r.minEnergyRatioAtAmps());
         span(j, "undefined_a", r.undefinedFromAmps(), r.undefinedToAmps());
-        j.text("reason", r.reason()).endObject();
+        j.text("reason", r.reason());
     }
 
     private static void span(JsonOut j, String key, double from, double to) {
@@ -228,6 +247,13 @@ public final class ReportWriter {
                 .number("referral_factor", f);
         if (device instanceof Relay relay) {
             j.number("breaker_s", relay.breakerSeconds());
+            if (relay.tolerance().isNone()) {
+                j.nullValue("tolerance");
+            } else {
+                j.startObject("tolerance").number("time_fraction", relay.tolerance().timeFraction())
+                        .number("time_min_s", relay.tolerance().timeMinSeconds())
+                        .number("pickup_fraction", relay.tolerance().pickupFraction()).endObject();
+            }
             if (relay.currentTransformer().isPresent()) {
                 j.pair("ct_a", relay.currentTransformer().get().primaryAmps(),
                         relay.currentTransformer().get().secondaryAmps());
@@ -243,8 +269,9 @@ public final class ReportWriter {
             j.number("rating_a", fuse.ratingAmps())
                     .integer("melting_points", fuse.minimumCurve().amps().length)
                     .integer("clearing_points", fuse.maximumCurve().amps().length)
-                    .number("clearing_i2t_a2s", fuse.clearingI2tA2s().orElse(Double.NaN))
-                    .number("clearing_i2t_referred_a2s", fuse.clearingI2tA2s().orElse(Double.NaN) * f * f);
+                    .text("category", fuse.category().orElse(null)).text("series", fuse.series().orElse(null));
+            energy(j, "let_through", fuse.letThrough());
+            energy(j, "pre_arcing", fuse.preArcing());
         } else if (device instanceof TripUnitBreaker breaker) {
             TripUnitBreaker.Settings s = breaker.settings();
             j.number("ir_a", s.irAmps()).number("ir_referred_a", s.irAmps() * f).number("tr_s", s.trSeconds())
@@ -257,7 +284,8 @@ public final class ReportWriter {
         } else if (device instanceof MiniatureBreaker mcb) {
             j.text("curve_type", mcb.type().name()).number("rating_a", mcb.ratedAmps())
                     .number("rating_referred_a", mcb.ratedAmps() * f).number("fastest_s", mcb.fastestSeconds())
-                    .number("let_through_i2t_a2s", mcb.letThroughI2tA2s());
+                    .number("let_through_from_a", mcb.letThroughFromAmps());
+            energy(j, "let_through", mcb.letThrough());
         }
         j.endObject();
     }
@@ -273,9 +301,29 @@ public final class ReportWriter {
         } else if (s instanceof DefiniteTimeStage dt) {
             j.text("curve", dt.instantaneous() ? "instantaneous" : "definite-time");
             pickups(j, dt.pickupAmps(), ctRatio, factor);
-            j.number("delay_s", dt.delaySeconds());
+            j.number("delay_s", dt.delaySeconds()).number("fastest_delay_s", dt.fastestDelaySeconds());
         } else {
             j.text("curve", s.toString());
+        }
+        j.endObject();
+    }
+
+    private static void energy(JsonOut j, String key, java.util.Optional<LetThroughEnergy> e) {
+        if (e.isEmpty()) {
+            j.nullValue(key);
+            return;
+        }
+        j.startObject(key);
+        if (e.get().isConstant()) {
+            j.number("constant_a2s", e.get().energiesA2s()[0]);
+        } else {
+            double[] a = e.get().amps();
+            double[] w = e.get().energiesA2s();
+            j.startArray("points_a_a2s");
+            for (int i = 0; i < a.length; i++) {
+                j.startArray().element(a[i]).element(w[i]).endArray();
+            }
+            j.endArray();
         }
         j.endObject();
     }

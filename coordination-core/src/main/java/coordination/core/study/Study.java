@@ -118,9 +118,15 @@ public record Study(String name, String title, double voltageKv, double frequenc
      * @param voltageKv its voltage level in kV
      * @param referralFactor the factor its currents are multiplied by at the study's reference voltage
      * @param referred the device with currents at the study's reference voltage
+     * @param assumptions the defaults its model rests on, where the study states no value
      */
     public record StudyDevice(ProtectiveDevice device, double voltageKv, double referralFactor,
-            ProtectiveDevice referred) {
+            ProtectiveDevice referred, List<Note> assumptions) {
+        /** Copies the list in. */
+        public StudyDevice {
+            assumptions = List.copyOf(assumptions);
+        }
+
         /** @return the device's id */
         public String id() {
             return device.id();
@@ -131,6 +137,18 @@ public record Study(String name, String title, double voltageKv, double frequenc
     public sealed interface StudyCheck permits CableCheckSpec, GradingCheckSpec {
     }
 
+    /** Where a cable check's DC-offset heating comes from. */
+    public enum DcSource {
+        /** A κ stated in the study. */
+        STATED_KAPPA,
+        /** κ from an X/R stated in the study (IEC 60909-0). */
+        FROM_X_R,
+        /** Neither stated: κ {@value DcOffset#ASSUMED_KAPPA} assumed. */
+        ASSUMED_KAPPA,
+        /** Switched off by the study. */
+        NONE
+    }
+
     /**
      * A cable check.
      *
@@ -138,10 +156,11 @@ public record Study(String name, String title, double voltageKv, double frequenc
      * @param device device id
      * @param requirement the margin asked for
      * @param range the fault currents checked
-     * @param dcOffset DC-offset heating, if asked for
+     * @param dcOffset DC-offset heating, unless switched off
+     * @param dcSource where the heating's κ came from
      */
     public record CableCheckSpec(String cable, String device, MarginRequirement requirement, CurrentRange range,
-            Optional<DcOffset> dcOffset) implements StudyCheck {
+            Optional<DcOffset> dcOffset, DcSource dcSource) implements StudyCheck {
     }
 
     /**

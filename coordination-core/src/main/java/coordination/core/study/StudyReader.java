@@ -15,11 +15,13 @@ import coordination.core.curve.Fuse;
 import coordination.core.curve.HighCurrentBehaviour;
 import coordination.core.curve.InverseTimeFamily;
 import coordination.core.curve.InverseTimeStage;
+import coordination.core.curve.LetThroughEnergy;
 import coordination.core.curve.McbType;
 import coordination.core.curve.MiniatureBreaker;
 import coordination.core.curve.MultiplierKind;
 import coordination.core.curve.ProtectiveDevice;
 import coordination.core.curve.Relay;
+import coordination.core.curve.RelayTolerance;
 import coordination.core.curve.SettingRange;
 import coordination.core.curve.TabulatedCurve;
 import coordination.core.curve.TimeCurrentCurve;
@@ -72,6 +74,9 @@ public final class StudyReader {
     private static final Map<String, ThermalMethod> METHODS = Binder.words(ThermalMethod.values(), ThermalMethod::key);
     private static final Map<String, Study.PageSize> PAGES = Binder.words(Study.PageSize.values(), Study.PageSize::key);
     private static final Map<String, McbType> MCB_TYPES = Binder.words(McbType.values(), McbType::name);
+    /** Utilization categories of IEC 60269-1 (from memory). */
+    private static final Map<String, String> FUSE_CATEGORIES = Binder.words(new String[] {"gG", "gM", "aM", "gR", "aR",
+        "gD", "gN", "gU"}, w -> w);
     private static final Map<String, HighCurrentBehaviour> HIGH_CURRENT = Binder.words(HighCurrentBehaviour.values(),
             HighCurrentBehaviour::key);
 
@@ -89,7 +94,10 @@ public final class StudyReader {
     private static final NumberField CT_SECONDARY = number("secondary_a", "A").above(0).to(100).required();
     private static final NumberField PICKUP = number("pickup_a", "A").above(0).to(1e6).required();
     private static final NumberField DT_DELAY = number("delay_s", "s").from(0).to(1000).required();
-    private static final NumberField INST_DELAY = number("delay_s", "s").from(0).to(1).orElse(0);
+    private static final NumberField INST_DELAY = number("delay_s", "s").from(0).to(1);
+    private static final NumberField TOL_TIME = number("time_percent", "%").from(0).to(50).required();
+    private static final NumberField TOL_TIME_MIN = number("time_min_s", "s").from(0).to(1).orElse(0);
+    private static final NumberField TOL_PICKUP = number("pickup_percent", "%").from(0).to(50).required();
     private static final NumberField MULTIPLIER_LIMITS = number("", "").above(0).to(100);
     private static final NumberField UPPER_MULTIPLE = number("upper_multiple", "").above(1).to(1000)
             .orElse(InverseTimeStage.STANDARD_UPPER_MULTIPLE);
@@ -98,22 +106,27 @@ public final class StudyReader {
     private static final NumberField EXPONENT = number("p", "").above(0).to(10).required();
     private static final NumberField RESET = number("reset_s", "s").above(0).to(1e4);
     private static final NumberField FUSE_RATING = number("rating_a", "A").above(0).to(1e5).required();
-    private static final NumberField FUSE_I2T = number("clearing_i2t_a2s", "A2s").above(0).to(1e12);
+    private static final NumberField ENERGY_CONSTANT = number("", "A2s").above(0).to(1e12);
     private static final NumberField IR = number("ir_a", "A").above(0).to(1e5).required();
     private static final NumberField TR = number("tr_s", "s").above(0).to(1000).required();
     private static final NumberField ISD = number("isd_a", "A").above(0).to(1e6).orElse(Double.POSITIVE_INFINITY);
     private static final NumberField TSD = number("tsd_s", "s").from(0).to(10).orElse(0);
     private static final NumberField II = number("ii_a", "A").above(0).to(1e6).orElse(Double.POSITIVE_INFINITY);
-    private static final NumberField PICKUP_TOLERANCE = number("pickup_tolerance", "").from(0).to(0.5).orElse(0.10);
+    private static final NumberField PICKUP_TOLERANCE = number("pickup_tolerance", "").from(0).to(0.5)
+            .orElse(TripUnitBreaker.DEFAULT_PICKUP_TOLERANCE);
     private static final NumberField TIME_TOLERANCE = number("time_tolerance", "").from(0).to(0.5).orElse(0.20);
     private static final NumberField PAIR_ITEM = number("", "").from(0).to(10);
     private static final NumberField MCB_RATING = number("rating_a", "A").above(0).to(125).required();
     private static final NumberField MCB_FASTEST = number("fastest_s", "s").from(0).to(0.1)
             .orElse(MiniatureBreaker.DEFAULT_FASTEST_SECONDS);
-    private static final NumberField MCB_I2T = number("let_through_i2t_a2s", "A2s").above(0).to(1e9);
     private static final NumberField MARGIN_RATIO = number("margin_ratio", "").from(1).to(1e6).required();
     private static final NumberField MARGIN_SECONDS = number("margin_s", "s").from(0).to(1e4).orElse(0);
     private static final NumberField KAPPA = number("kappa", "").above(1).to(2).required();
+    private static final NumberField X_OVER_R = number("x_r", "").above(0).to(1000).required();
+    private static final Map<String, Boolean> INTERVAL_TO = intervalWords();
+    /** Highest system voltage for which the library holds IEC 60949's non-adiabatic constants. */
+    private static final double NON_ADIABATIC_MAX_KV = 3.0;
+    private static final NumberField CABLE_VOLTAGE = number("voltage_kv", "kV").above(0).to(1000);
     private static final NumberField RATING_RATIO = number("rating_ratio", "").from(1).to(1000).required();
     private static final NumberField INTERVAL = number("interval_s", "s").from(0).to(100).required();
 
@@ -137,6 +150,13 @@ public final class StudyReader {
             k.put(other, other);
         }
         return k;
+    }
+
+    private static Map<String, Boolean> intervalWords() {
+        Map<String, Boolean> m = new LinkedHashMap<>();
+        m.put("operating-time", false);
+        m.put("clearing-time", true);
+        return m;
     }
 
     private static Map<String, ConductorMaterial> conductorWords() {
@@ -341,7 +361,7 @@ public final class StudyReader {
         Node.MapNode m = mapped.get();
         int before = b.problemCount();
         b.allowOnly(m, path, "id", "conductor", "insulation", "size_mm2", "size", "parallel", "initial_c", "final_c",
-                "load", "method", "fault_ka");
+                "load", "method", "fault_ka", "voltage_kv");
         Optional<String> id = b.id(m, path, "every cable needs an id");
         Optional<ConductorMaterial> conductor = b.choice(m, path, "conductor", CONDUCTORS);
         Optional<Insulation> insulation = b.choice(m, path, "insulation", INSULATIONS);
@@ -383,20 +403,43 @@ public final class StudyReader {
         }
         Insulation ins = insulation.get();
         double mm2 = size.getAsDouble();
+        ThermalMethod tm = method.orElseThrow();
+        OptionalDouble kv = studyKv.isPresent() ? b.number(m, path, CABLE_VOLTAGE.orElse(studyKv.getAsDouble()))
+                : b.number(m, path, CABLE_VOLTAGE);
+        if (kv.isEmpty()) {
+            return Optional.empty();
+        }
+        if (tm == ThermalMethod.NON_ADIABATIC && kv.getAsDouble() > NON_ADIABATIC_MAX_KV) {
+            b.problem(b.at(m, "method"), path + ".method", "the cable is for " + Checks.format(kv.getAsDouble())
+                    + " kV; IEC 60949's non-adiabatic constants are held for cables up to 3 kV only - use adiabatic,"
+                    + " which is conservative");
+            return Optional.empty();
+        }
+        // each method takes its own standard's temperatures
+        OptionalDouble defaultInitial = tm == ThermalMethod.ICEA ? ins.iceaOperatingCelsius()
+                : OptionalDouble.of(ins.maxOperatingCelsius());
+        OptionalDouble defaultFinal = tm == ThermalMethod.ICEA ? ins.iceaShortCircuitCelsius()
+                : OptionalDouble.of(ins.shortCircuitCelsius(mm2));
+        if (defaultInitial.isEmpty() && !b.has(m, "initial_c") && !b.has(m, "load")
+                || defaultFinal.isEmpty() && !b.has(m, "final_c")) {
+            b.problem(b.at(m, "method"), path + ".method", "ICEA P-32-382 temperatures are held for pvc, pvc-90,"
+                    + " xlpe and epr only - give initial_c and final_c for " + ins.key());
+            return Optional.empty();
+        }
         Study.TemperatureSource initialSource;
         OptionalDouble initial;
         if (b.has(m, "load") && b.has(m, "initial_c")) {
             b.problem(b.value(m, "load"), path + ".load", "give either initial_c or load, not both");
             return Optional.empty();
         } else if (b.has(m, "load")) {
-            initial = loadTemperature(m, path, ins);
+            initial = loadTemperature(m, path, defaultInitial.orElse(ins.maxOperatingCelsius()));
             initialSource = Study.TemperatureSource.FROM_LOAD;
         } else {
-            initial = b.number(m, path, INITIAL.orElse(ins.maxOperatingCelsius()));
+            initial = b.has(m, "initial_c") ? b.number(m, path, INITIAL) : defaultInitial;
             initialSource = b.has(m, "initial_c") ? Study.TemperatureSource.STATED
                     : Study.TemperatureSource.INSULATION_DEFAULT;
         }
-        OptionalDouble fin = b.number(m, path, FINAL.orElse(ins.shortCircuitCelsius(mm2)));
+        OptionalDouble fin = b.has(m, "final_c") ? b.number(m, path, FINAL) : defaultFinal;
         Study.TemperatureSource finalSource = b.has(m, "final_c") ? Study.TemperatureSource.STATED
                 : Study.TemperatureSource.INSULATION_DEFAULT;
         if (initial.isEmpty() || fin.isEmpty() || parallel.isEmpty()) {
@@ -410,7 +453,7 @@ public final class StudyReader {
         }
         try {
             CableThermalLimit limit = new CableThermalLimit(id.get(), conductor.get(), ins, mm2, parallel.getAsInt(),
-                    initial.getAsDouble(), fin.getAsDouble(), method.orElseThrow());
+                    initial.getAsDouble(), fin.getAsDouble(), tm);
             return Optional.of(new Study.StudyCable(limit, sizeText,
                     fault.map(f -> new Study.CurrentRange(f[0], f[1])), initialSource, finalSource));
         } catch (IllegalArgumentException e) {
@@ -419,7 +462,7 @@ public final class StudyReader {
         }
     }
 
-    private OptionalDouble loadTemperature(Node.MapNode m, String path, Insulation ins) {
+    private OptionalDouble loadTemperature(Node.MapNode m, String path, double maxOperatingCelsius) {
         String p = path + ".load";
         Optional<Node.MapNode> mapped = b.map(b.value(m, "load"), p);
         if (mapped.isEmpty()) {
@@ -433,7 +476,7 @@ public final class StudyReader {
         if (current.isEmpty() || rated.isEmpty() || ambient.isEmpty()) {
             return OptionalDouble.empty();
         }
-        return OptionalDouble.of(CableThermalLimit.initialFromLoad(ambient.getAsDouble(), ins.maxOperatingCelsius(),
+        return OptionalDouble.of(CableThermalLimit.initialFromLoad(ambient.getAsDouble(), maxOperatingCelsius,
                 current.getAsDouble(), rated.getAsDouble()));
     }
 
@@ -455,12 +498,13 @@ public final class StudyReader {
         int before = b.problemCount();
         Optional<ProtectiveDevice> device;
         String who = id.orElse(null);
+        List<Note> notes = new ArrayList<>();
         try {
             device = switch (type.get()) {
-                case RELAY -> relay(m, path, who);
-                case FUSE -> fuse(m, path, who);
-                case BREAKER -> breaker(m, path, who);
-                case MCB -> mcb(m, path, who);
+                case RELAY -> relay(m, path, who, notes);
+                case FUSE -> fuse(m, path, who, notes);
+                case BREAKER -> breaker(m, path, who, notes);
+                case MCB -> mcb(m, path, who, notes);
             };
         } catch (IllegalArgumentException e) {
             // a combination of settings the model refuses, each valid on its own
@@ -472,11 +516,11 @@ public final class StudyReader {
         }
         double factor = studyKv.isEmpty() ? 1.0 : kv.getAsDouble() / studyKv.getAsDouble();
         return Optional.of(new Study.StudyDevice(device.get(), kv.getAsDouble(), factor,
-                device.get().referredBy(factor)));
+                device.get().referredBy(factor), notes));
     }
 
-    private Optional<ProtectiveDevice> relay(Node.MapNode m, String path, String id) {
-        b.allowOnly(m, path, "id", "type", "voltage_kv", "breaker_s", "ct", "stages");
+    private Optional<ProtectiveDevice> relay(Node.MapNode m, String path, String id, List<Note> notes) {
+        b.allowOnly(m, path, "id", "type", "voltage_kv", "breaker_s", "ct", "stages", "tolerance");
         int before = b.problemCount();
         OptionalDouble breaker = b.number(m, path, BREAKER_TIME);
         Optional<CurrentTransformer> ct = Optional.empty();
@@ -513,10 +557,50 @@ public final class StudyReader {
         for (int i = 0; i < stageNodes.get().size(); i++) {
             stage(stageNodes.get().get(i), path + ".stages[" + i + "]").ifPresent(stages::add);
         }
+        RelayTolerance tolerance = RelayTolerance.NONE;
+        if (b.has(m, "tolerance")) {
+            tolerance = relayTolerance(m, path).orElse(RelayTolerance.NONE);
+        }
         if (b.problemCount() > before || stages.size() != stageNodes.get().size() || id == null) {
             return Optional.empty();
         }
-        return Optional.of(new Relay(id, stages, ct, breaker.getAsDouble()));
+        String who = "relay '" + id + "'";
+        if (!b.has(m, "tolerance")) {
+            notes.add(new Note("relay-tolerance-not-stated", who + ": tolerance not stated, so both edges are the"
+                    + " nominal curve; an interval must then contain the relay's error allowance"));
+        }
+        for (TimeCurrentCurve st : stages) {
+            if (st instanceof DefiniteTimeStage dt && dt.timeAssumed()) {
+                notes.add(new Note("instantaneous-time-assumed", who + ": instantaneous operating time not stated;"
+                        + " 20 ms to 40 ms assumed (common practice), the slow edge for cable checks"));
+                break;
+            }
+        }
+        for (TimeCurrentCurve st : stages) {
+            if (st instanceof InverseTimeStage inv && inv.highCurrent() == HighCurrentBehaviour.BAND) {
+                notes.add(new Note("high-current-band", who + ": above " + Checks.format(inv.upperMultiple())
+                        + " x pickup the " + inv.label() + " stage is a band between following its equation and"
+                        + " holding (high_current not stated)"));
+                break;
+            }
+        }
+        return Optional.of(new Relay(id, stages, ct, breaker.getAsDouble(), tolerance));
+    }
+
+    private Optional<RelayTolerance> relayTolerance(Node.MapNode m, String path) {
+        String p = path + ".tolerance";
+        Optional<Node.MapNode> t = b.map(b.value(m, "tolerance"), p);
+        if (t.isEmpty()) {
+            return Optional.empty();
+        }
+        b.allowOnly(t.get(), p, "time_percent", "time_min_s", "pickup_percent");
+        OptionalDouble time = b.number(t.get(), p, TOL_TIME);
+        OptionalDouble min = b.number(t.get(), p, TOL_TIME_MIN);
+        OptionalDouble pickup = b.number(t.get(), p, TOL_PICKUP);
+        if (time.isEmpty() || min.isEmpty() || pickup.isEmpty()) {
+            return Optional.empty();
+        }
+        return Optional.of(new RelayTolerance(time.getAsDouble() / 100, min.getAsDouble(), pickup.getAsDouble() / 100));
     }
 
     private Optional<TimeCurrentCurve> stage(Node n, String path) {
@@ -542,10 +626,12 @@ public final class StudyReader {
             case INSTANTANEOUS -> {
                 b.allowOnly(m, path, "curve", "pickup_a", "delay_s");
                 OptionalDouble delay = b.number(m, path, INST_DELAY);
-                if (pickup.isEmpty() || delay.isEmpty()) {
+                if (pickup.isEmpty() || b.has(m, INST_DELAY.key()) && delay.isEmpty()) {
                     return Optional.empty();
                 }
-                return Optional.of(DefiniteTimeStage.instantaneous(pickup.getAsDouble(), delay.getAsDouble()));
+                return Optional.of(delay.isPresent()
+                        ? DefiniteTimeStage.instantaneous(pickup.getAsDouble(), delay.getAsDouble())
+                        : DefiniteTimeStage.instantaneousTimeAssumed(pickup.getAsDouble()));
             }
             default -> {
                 return inverse(m, path, curve.get(), pickup);
@@ -583,8 +669,7 @@ public final class StudyReader {
         int before = b.problemCount();
         OptionalDouble multiplier = b.number(m, path, MULTIPLIER_LIMITS.required().named(kind.key()));
         Optional<SettingRange> range = settingRange(m, path, kind, multiplier);
-        Optional<HighCurrentBehaviour> hc = b.choice(m, path, "high_current", HIGH_CURRENT,
-                HighCurrentBehaviour.FOLLOW_EQUATION);
+        Optional<HighCurrentBehaviour> hc = b.choice(m, path, "high_current", HIGH_CURRENT, HighCurrentBehaviour.BAND);
         OptionalDouble upper = b.number(m, path, UPPER_MULTIPLE);
         double a;
         double bb;
@@ -629,26 +714,61 @@ public final class StudyReader {
         return Optional.of(r);
     }
 
-    private Optional<ProtectiveDevice> fuse(Node.MapNode m, String path, String id) {
-        b.allowOnly(m, path, "id", "type", "voltage_kv", "rating_a", "melting", "clearing", "clearing_i2t_a2s");
+    private Optional<ProtectiveDevice> fuse(Node.MapNode m, String path, String id, List<Note> notes) {
+        b.allowOnly(m, path, "id", "type", "voltage_kv", "rating_a", "melting", "clearing", "clearing_i2t_a2s",
+                "clearing_i2t", "pre_arcing_i2t_a2s", "pre_arcing_i2t", "category", "series");
         int before = b.problemCount();
         OptionalDouble rating = b.number(m, path, FUSE_RATING);
-        OptionalDouble i2t = b.number(m, path, FUSE_I2T);
-        if (b.problemCount() > before && b.has(m, FUSE_I2T.key()) && i2t.isEmpty()) {
-            return Optional.empty();
-        }
+        Optional<LetThroughEnergy> letThrough = energy(m, path, "clearing_i2t_a2s", "clearing_i2t");
+        Optional<LetThroughEnergy> preArcing = energy(m, path, "pre_arcing_i2t_a2s", "pre_arcing_i2t");
+        Optional<String> category = b.has(m, "category") ? b.choice(m, path, "category", FUSE_CATEGORIES)
+                : Optional.empty();
+        Optional<String> series = b.optionalText(m, path, "series");
         String who = "fuse '" + id + "'";
         Optional<TabulatedCurve> melting = tabulated(m, path, "melting", who + ": melting");
         Optional<TabulatedCurve> clearing = tabulated(m, path, "clearing", who + ": clearing");
-        if (rating.isEmpty() || melting.isEmpty() || clearing.isEmpty() || id == null) {
+        if (b.problemCount() > before || rating.isEmpty() || melting.isEmpty() || clearing.isEmpty() || id == null) {
             return Optional.empty();
         }
+        letThrough.filter(LetThroughEnergy::isConstant).ifPresent(e -> notes.add(new Note("constant-let-through",
+                who + ": one let-through energy (" + Checks.format(e.a2s(1)) + " A2s) assumed at every prospective"
+                        + " current above its points; a maker's curve rises with the current")));
         try {
-            return Optional.of(new Fuse(id, rating.getAsDouble(), melting.get(), clearing.get(), i2t));
+            return Optional.of(new Fuse(id, rating.getAsDouble(), melting.get(), clearing.get(), letThrough, preArcing,
+                    category, series));
         } catch (IllegalArgumentException e) {
             b.problem(b.value(m, "clearing"), path + ".clearing", e.getMessage());
             return Optional.empty();
         }
+    }
+
+    /** An energy given as one value (key in A2s) or as points of prospective kA and A2s; empty if neither or invalid. */
+    private Optional<LetThroughEnergy> energy(Node.MapNode m, String path, String constantKey, String pointsKey) {
+        if (b.has(m, constantKey) && b.has(m, pointsKey)) {
+            b.problem(b.value(m, pointsKey), path + "." + pointsKey, "give either " + constantKey + " or " + pointsKey
+                    + ", not both");
+            return Optional.empty();
+        }
+        if (b.has(m, constantKey)) {
+            return optional(b.number(m, path, ENERGY_CONSTANT.named(constantKey))).map(LetThroughEnergy::constant);
+        }
+        if (!b.has(m, pointsKey)) {
+            return Optional.empty();
+        }
+        Optional<double[][]> pts = b.points(m, path, pointsKey, MAX_POINTS, Binder.ENERGY_POINTS);
+        if (pts.isEmpty()) {
+            return Optional.empty();
+        }
+        double[] amps = pts.get()[0].clone();
+        for (int i = 0; i < amps.length; i++) {
+            amps[i] *= 1000;
+        }
+        Optional<String> bad = LetThroughEnergy.problem(amps, pts.get()[1]);
+        if (bad.isPresent()) {
+            b.problem(b.value(m, pointsKey), path + "." + pointsKey, bad.get());
+            return Optional.empty();
+        }
+        return Optional.of(LetThroughEnergy.points(amps, pts.get()[1]));
     }
 
     private Optional<TabulatedCurve> tabulated(Node.MapNode m, String path, String key, String label) {
@@ -667,7 +787,7 @@ public final class StudyReader {
         return Optional.of(new TabulatedCurve(label, amps, seconds));
     }
 
-    private Optional<ProtectiveDevice> breaker(Node.MapNode m, String path, String id) {
+    private Optional<ProtectiveDevice> breaker(Node.MapNode m, String path, String id, List<Note> notes) {
         b.allowOnly(m, path, "id", "type", "voltage_kv", "ir_a", "tr_s", "isd_a", "tsd_s", "tsd_i2t", "ii_a",
                 "pickup_tolerance", "time_tolerance", "long_time_band", "instantaneous_s");
         int before = b.problemCount();
@@ -685,6 +805,18 @@ public final class StudyReader {
                 : Optional.of(new double[] {0.01, 0.05});
         if (b.problemCount() > before || id == null) {
             return Optional.empty();
+        }
+        String who = "breaker '" + id + "'";
+        if (!b.has(m, PICKUP_TOLERANCE.key()) && (b.has(m, ISD.key()) || b.has(m, II.key()))) {
+            notes.add(new Note("breaker-pickup-tolerance-assumed", who + ": Isd and Ii pickup tolerance not stated;"
+                    + " +/-20 % assumed (IEC 60947-2)"));
+        }
+        if (!b.has(m, TIME_TOLERANCE.key())) {
+            notes.add(new Note("breaker-time-tolerance-assumed", who + ": time tolerance not stated; +/-20 % assumed"));
+        }
+        if (!b.has(m, "instantaneous_s")) {
+            notes.add(new Note("breaker-clearing-assumed", who + ": instantaneous clearing time not stated; 10 ms to"
+                    + " 50 ms assumed"));
         }
         TripUnitBreaker.Settings s = new TripUnitBreaker.Settings(ir.getAsDouble(), tr.getAsDouble(),
                 isd.getAsDouble(), tsd.getAsDouble(), ramp.orElseThrow(), ii.getAsDouble(), inst.get()[0],
@@ -717,18 +849,27 @@ public final class StudyReader {
         return Optional.of(new double[] {lo.getAsDouble(), hi.getAsDouble()});
     }
 
-    private Optional<ProtectiveDevice> mcb(Node.MapNode m, String path, String id) {
-        b.allowOnly(m, path, "id", "type", "voltage_kv", "curve_type", "rating_a", "fastest_s", "let_through_i2t_a2s");
+    private Optional<ProtectiveDevice> mcb(Node.MapNode m, String path, String id, List<Note> notes) {
+        b.allowOnly(m, path, "id", "type", "voltage_kv", "curve_type", "rating_a", "fastest_s", "let_through_i2t_a2s",
+                "let_through_i2t");
         int before = b.problemCount();
         Optional<McbType> t = b.choice(m, path, "curve_type", MCB_TYPES);
         OptionalDouble rating = b.number(m, path, MCB_RATING);
         OptionalDouble fastest = b.number(m, path, MCB_FASTEST);
-        OptionalDouble i2t = b.number(m, path, MCB_I2T);
+        Optional<LetThroughEnergy> letThrough = energy(m, path, "let_through_i2t_a2s", "let_through_i2t");
         if (b.problemCount() > before || id == null) {
             return Optional.empty();
         }
+        String who = "mcb '" + id + "'";
+        letThrough.filter(LetThroughEnergy::isConstant).ifPresent(e -> notes.add(new Note("constant-let-through",
+                who + ": one let-through energy (" + Checks.format(e.a2s(1)) + " A2s) assumed at every prospective"
+                        + " current; a maker's curve rises with the current")));
+        if (!b.has(m, MCB_FASTEST.key())) {
+            notes.add(new Note("mcb-fastest-assumed", who + ": fastest clearing time not stated; 5 ms assumed"
+                    + " (a quarter cycle at 50 Hz)"));
+        }
         return Optional.of(new MiniatureBreaker(id, t.orElseThrow(), rating.getAsDouble(), fastest.getAsDouble(),
-                i2t.orElse(Double.NaN)));
+                letThrough));
     }
 
     // ---------------------------------------------------------------------------------------- checks
@@ -768,18 +909,45 @@ public final class StudyReader {
         }
         Optional<double[]> range = b.rangeKa(m, path, "range_ka", false);
         Optional<DcOffset> dc = Optional.empty();
-        if (b.has(m, "dc_offset")) {
+        Study.DcSource dcSource = Study.DcSource.ASSUMED_KAPPA;
+        if (frequency.isEmpty()) {
+            return Optional.empty();
+        }
+        if (!b.has(m, "dc_offset")) {
+            dc = Optional.of(new DcOffset(DcOffset.ASSUMED_KAPPA, frequency.getAsDouble()));
+        } else if (b.value(m, "dc_offset") instanceof Node.Scalar word && word.type() == Node.ScalarType.STRING) {
+            if (!word.text().equals("none")) {
+                b.problem(word, path + ".dc_offset", "found '" + Binder.echo(word.text()) + "' - write none, or"
+                        + " {kappa: 1.8}, or {x_r: 10}");
+                return Optional.empty();
+            }
+            dcSource = Study.DcSource.NONE;
+        } else {
             String p = path + ".dc_offset";
             Optional<Node.MapNode> d = b.map(b.value(m, "dc_offset"), p);
             if (d.isEmpty()) {
                 return Optional.empty();
             }
-            b.allowOnly(d.get(), p, "kappa");
-            OptionalDouble kappa = b.number(d.get(), p, KAPPA);
-            if (kappa.isEmpty() || frequency.isEmpty()) {
+            b.allowOnly(d.get(), p, "kappa", "x_r");
+            if (b.has(d.get(), "kappa") == b.has(d.get(), "x_r")) {
+                b.problem(d.get(), p, "give kappa or x_r, one of them");
                 return Optional.empty();
             }
-            dc = Optional.of(new DcOffset(kappa.getAsDouble(), frequency.getAsDouble()));
+            if (b.has(d.get(), "kappa")) {
+                OptionalDouble kappa = b.number(d.get(), p, KAPPA);
+                if (kappa.isEmpty()) {
+                    return Optional.empty();
+                }
+                dc = Optional.of(new DcOffset(kappa.getAsDouble(), frequency.getAsDouble()));
+                dcSource = Study.DcSource.STATED_KAPPA;
+            } else {
+                OptionalDouble xr = b.number(d.get(), p, X_OVER_R);
+                if (xr.isEmpty()) {
+                    return Optional.empty();
+                }
+                dc = Optional.of(DcOffset.fromXOverR(xr.getAsDouble(), frequency.getAsDouble()));
+                dcSource = Study.DcSource.FROM_X_R;
+            }
         }
         if (b.problemCount() > before || cable.isEmpty() || device.isEmpty() || req.isEmpty()) {
             return Optional.empty();
@@ -793,11 +961,15 @@ public final class StudyReader {
                 return Optional.empty();
             }
         }
-        return Optional.of(new Study.CableCheckSpec(cable.get(), device.get(), req.get(), checked.get(), dc));
+        return Optional.of(new Study.CableCheckSpec(cable.get(), device.get(), req.get(), checked.get(), dc, dcSource));
     }
 
     private Optional<Study.StudyCheck> gradingCheck(Node.MapNode m, String path, Map<String, Study.StudyDevice> devices) {
-        b.allowOnly(m, path, "upstream", "downstream", "interval_s", "rating_ratio", "no_overlap", "range_ka");
+        b.allowOnly(m, path, "upstream", "downstream", "interval_s", "interval_to", "rating_ratio", "no_overlap",
+                "range_ka");
+        if (b.has(m, "interval_to") && !b.has(m, "interval_s")) {
+            b.problemAtKey(m.entries().get("interval_to"), path + ".interval_to", "goes with interval_s");
+        }
         Optional<String> up = reference(m, path, "upstream", devices.keySet(), "device");
         Optional<String> down = reference(m, path, "downstream", devices.keySet(), "device");
         int given = (b.has(m, "interval_s") ? 1 : 0) + (b.has(m, "rating_ratio") ? 1 : 0)
@@ -823,7 +995,9 @@ public final class StudyReader {
                 req = Optional.of(GradingRequirement.noOverlap());
             }
         } else {
-            req = optional(b.number(m, path, INTERVAL)).map(GradingRequirement::intervalSeconds);
+            Optional<Boolean> toClearing = b.choice(m, path, "interval_to", INTERVAL_TO, false);
+            req = optional(b.number(m, path, INTERVAL)).flatMap(v -> toClearing.map(c -> c
+                    ? GradingRequirement.intervalBetweenClearingTimes(v) : GradingRequirement.intervalSeconds(v)));
         }
         Optional<double[]> range = b.rangeKa(m, path, "range_ka", true);
         if (up.isPresent() && up.equals(down)) {

@@ -7,20 +7,46 @@ import java.util.ArrayList;
 import java.util.List;
 
 /**
- * The results of every check of a study, in study order. {@link ReportWriter} writes its JSON
- * form ({@code spec/report-format.md}).
+ * The results of every check of a study, in study order, with what each rests on. {@link ReportWriter}
+ * writes its JSON form ({@code spec/report-format.md}).
  *
  * @param study the study
  * @param results one result per check, in the order of the study's checks
+ * @param notes the assumptions and warnings of each check, in the same order
+ * @param warnings warnings about the study as a whole
  */
-public record StudyReport(Study study, List<CheckResult> results) {
+public record StudyReport(Study study, List<CheckResult> results, List<CheckNotes> notes, List<Note> warnings) {
 
     /** Version of the report format. */
     public static final int FORMAT = 1;
 
-    /** Copies the list in. */
+    /**
+     * What one check rests on.
+     *
+     * @param assumptions defaults and assumptions its result depends on
+     * @param warnings what its context says it leaves out
+     */
+    public record CheckNotes(List<Note> assumptions, List<Note> warnings) {
+        /** Copies the lists in. */
+        public CheckNotes {
+            assumptions = List.copyOf(assumptions);
+            warnings = List.copyOf(warnings);
+        }
+    }
+
+    /**
+     * Copies the lists in.
+     *
+     * @throws IllegalArgumentException if there are not as many notes as results
+     */
     public StudyReport {
         results = List.copyOf(results);
+        notes = List.copyOf(notes);
+        warnings = List.copyOf(warnings);
+        if (notes.size() != results.size()) {
+            throw new IllegalArgumentException("study report: found " + notes.size() + " notes for " + results.size()
+                    + " results - must be one each");
+        }
     }
 
     /**
@@ -31,6 +57,7 @@ public record StudyReport(Study study, List<CheckResult> results) {
      */
     public static StudyReport evaluate(Study study) {
         List<CheckResult> results = new ArrayList<>();
+        List<CheckNotes> notes = new ArrayList<>();
         for (Study.StudyCheck c : study.checks()) {
             if (c instanceof Study.CableCheckSpec cc) {
                 results.add(new CableCheck(study.device(cc.device()).referred(), study.cable(cc.cable()).limit(),
@@ -41,8 +68,9 @@ public record StudyReport(Study study, List<CheckResult> results) {
                         study.device(g.downstream()).referred(), g.range().fromAmps(), g.range().toAmps(),
                         g.requirement()));
             }
+            notes.add(StudyNotes.of(study, c, results.get(results.size() - 1)));
         }
-        return new StudyReport(study, results);
+        return new StudyReport(study, results, notes, List.of());
     }
 
     /**

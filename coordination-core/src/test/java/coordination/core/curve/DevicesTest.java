@@ -101,6 +101,6 @@ class DevicesTest {
         assertThat(lv.maximumCurve().seconds(2751), is(0.5));
         Fuse f = new Fuse("F", 100, new TabulatedCurve("m", new double[] {200, 2000}, new double[] {100, 0.01}),
                 new TabulatedCurve("c", new double[] {200, 2000}, new double[] {120, 0.02}), OptionalDouble.of(1e5));
-        assertThat(f.referredBy(2).clearingI2tA2s().getAsDouble(), closeTo(4e5, 1e-6));
+        assertThat(f.referredBy(2).letThrough().orElseThrow().a2s(1000), closeTo(4e5, 1e-6));
     }
 }

@@ -2,7 +2,7 @@ package coordination.core.curve;
 
 import java.util.ArrayList;
 import java.util.List;
-import java.util.OptionalDouble;
+import java.util.Optional;
 import java.util.SplittableRandom;
 
 /** Random devices for property tests; every draw comes from the caller's seeded generator. */
@@ -26,17 +26,25 @@ public final class RandomDevices {
         InverseTimeFamily f = InverseTimeFamily.values()[r.nextInt(InverseTimeFamily.values().length)];
         double mult = f.multiplierKind() == MultiplierKind.TIME_DIAL ? logUniform(r, 0.5, 10) : logUniform(r, 0.05, 1.0);
         InverseTimeStage inv = InverseTimeStage.of(f, pickup, mult);
-        if (r.nextInt(3) == 0) {
-            inv = inv.withHighCurrent(HighCurrentBehaviour.HOLD_AT_UPPER_MULTIPLE, 20);
+        int hc = r.nextInt(3);
+        if (hc < 2) {
+            inv = inv.withHighCurrent(hc == 0 ? HighCurrentBehaviour.HOLD_AT_UPPER_MULTIPLE
+                    : HighCurrentBehaviour.FOLLOW_EQUATION, 20);
         }
         stages.add(inv);
         if (r.nextBoolean()) {
             stages.add(DefiniteTimeStage.definiteTime(pickup * logUniform(r, 3, 15), logUniform(r, 0.05, 1.0)));
         }
         if (r.nextBoolean()) {
-            stages.add(DefiniteTimeStage.instantaneous(pickup * logUniform(r, 10, 40), r.nextDouble(0.0, 0.03)));
+            double inst = pickup * logUniform(r, 10, 40);
+            stages.add(r.nextBoolean() ? DefiniteTimeStage.instantaneous(inst, r.nextDouble(0.0, 0.03))
+                    : DefiniteTimeStage.instantaneousTimeAssumed(inst));
         }
-        return new Relay("R", stages, 1.0, r.nextBoolean() ? logUniform(r, 0.03, 0.1) : 0.0);
+        // a third with a stated IEC 60255-151 accuracy
+        RelayTolerance tolerance = r.nextInt(3) == 0 ? new RelayTolerance(r.nextDouble(0.02, 0.1),
+                r.nextDouble(0.0, 0.05), r.nextDouble(0.0, 0.1)) : RelayTolerance.NONE;
+        return new Relay("R", stages, java.util.Optional.empty(), r.nextBoolean() ? logUniform(r, 0.03, 0.1) : 0.0,
+                tolerance);
     }
 
     /**
@@ -66,8 +74,15 @@ public final class RandomDevices {
                 clear[i] = melt[i];
             }
         }
+        double last = amps[n - 1];
+        Optional<LetThroughEnergy> letThrough = r.nextBoolean()
+                ? Optional.of(LetThroughEnergy.constant(last * last * clear[n - 1])) : Optional.empty();
+        // a maker's pre-arcing I2t above the melting curve: about the adiabatic melting energy, rising slowly
+        Optional<LetThroughEnergy> preArcing = r.nextBoolean() ? Optional.of(LetThroughEnergy.points(
+                new double[] {last, last * 10, last * 100}, new double[] {last * last * melt[n - 1],
+                    last * last * melt[n - 1] * 1.1, last * last * melt[n - 1] * 1.3})) : Optional.empty();
         return new Fuse("F", rating, new TabulatedCurve("melting", amps, melt), new TabulatedCurve("clearing", amps,
-                clear), r.nextBoolean() ? OptionalDouble.of(amps[n - 1] * amps[n - 1] * clear[n - 1]) : OptionalDouble.empty());
+                clear), letThrough, preArcing, Optional.empty(), Optional.empty());
     }
 
     /**
@@ -94,9 +109,15 @@ public final class RandomDevices {
         double[] ratings = {6, 10, 16, 20, 25, 32, 40, 50, 63, 80, 100, 125};
         McbType type = McbType.values()[r.nextInt(3)];
         double rating = ratings[r.nextInt(ratings.length)];
-        // half of them with a maker's let-through energy
-        double i2t = r.nextBoolean() ? logUniform(r, 5e3, 2e5) : Double.NaN;
-        return new MiniatureBreaker("M", type, rating, MiniatureBreaker.DEFAULT_FASTEST_SECONDS, i2t);
+        // half of them with a maker's let-through energy, half of those as points rising with current
+        java.util.Optional<LetThroughEnergy> energy = java.util.Optional.empty();
+        if (r.nextBoolean()) {
+            double i2t = logUniform(r, 5e3, 2e5);
+            energy = java.util.Optional.of(r.nextBoolean() ? LetThroughEnergy.constant(i2t)
+                    : LetThroughEnergy.points(new double[] {rating * 10, rating * 100, rating * 1000},
+                            new double[] {i2t / 4, i2t, i2t * 2}));
+        }
+        return new MiniatureBreaker("M", type, rating, MiniatureBreaker.DEFAULT_FASTEST_SECONDS, energy);
     }
 
     /**

@@ -68,7 +68,8 @@ class DesignAidsTest {
     void largestStandardInverseMultiplierIsTheClosedForm() {
         // worked: with one SI stage, t_c / t_d = (kS/I)^2 (M^0.02 - 1) / (0.14 TMS); the smallest ratio over the
         // range sits at one of its ends, so the largest TMS for ratio 1 is the smaller of the two end values
-        Relay relay = Relay.of("R", InverseTimeStage.of(InverseTimeFamily.IEC_STANDARD_INVERSE, 400, 0.1));
+        Relay relay = Relay.of("R", InverseTimeStage.of(InverseTimeFamily.IEC_STANDARD_INVERSE, 400, 0.1)
+                .withHighCurrent(coordination.core.curve.HighCurrentBehaviour.FOLLOW_EQUATION, 20));
         SlowestSetting.Result r = SlowestSetting.largestMultiplier(relay, 0, 1, CU_XLPE, 1500, 12000,
                 MarginRequirement.ratio(1), 100);
         double ks2 = Math.pow(CU_XLPE.k() * 70, 2);

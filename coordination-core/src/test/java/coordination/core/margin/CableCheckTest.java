@@ -14,6 +14,7 @@ import coordination.core.cable.ConductorMaterial;
 import coordination.core.cable.Insulation;
 import coordination.core.curve.DefiniteTimeStage;
 import coordination.core.curve.Fuse;
+import coordination.core.curve.HighCurrentBehaviour;
 import coordination.core.curve.InverseTimeFamily;
 import coordination.core.curve.InverseTimeStage;
 import coordination.core.curve.Relay;
@@ -87,9 +88,10 @@ class CableCheckTest {
 
     @Test
     void regionsSayWhichMethodAppliedWhere() {
-        Relay relay = Relay.of("R", InverseTimeStage.of(InverseTimeFamily.IEC_EXTREMELY_INVERSE, 200, 0.5));
+        Relay relay = Relay.of("R", InverseTimeStage.of(InverseTimeFamily.IEC_EXTREMELY_INVERSE, 200, 0.5)
+                .withHighCurrent(HighCurrentBehaviour.FOLLOW_EQUATION, 20));
         CableCheckResult r = CableCheck.check(relay, CU_XLPE_35, 300, 20000, MarginRequirement.seconds(0));
-        // 0.5 x 80 / (M^2 - 1) = 5 s at M = 3, = 0.1 s at M = sqrt(401)
+        // a stage that follows its equation: 0.5 x 80 / (M^2 - 1) = 5 s at M = 3, = 0.1 s at M = sqrt(401)
         assertThat(r.regions().stream().map(ThermalRegion::method).toList(),
                 contains("adiabatic-conservative", "adiabatic", "energy"));
         assertThat(r.regions().get(1).fromAmps(), closeTo(600, 1e-6));
@@ -156,6 +158,6 @@ class CableCheckTest {
         new com.fasterxml.jackson.databind.ObjectMapper().readTree(text).fieldNames().forEachRemaining(keys::add);
         assertThat(keys, contains("kind", "device", "cable", "pass", "required_margin_s",
                 "range_a", "min_margin_s", "min_margin_at_a", "min_margin_side", "min_ratio", "min_ratio_at_a",
-                "crossings_a", "not_cleared_a", "undefined_a", "methods", "reason"));
+                "crossings_a", "not_cleared_a", "undefined_a", "methods", "reason", "assumptions", "warnings"));
     }
 }

@@ -10,7 +10,9 @@ import coordination.core.cable.ConductorMaterial;
 import coordination.core.cable.ConductorSizes;
 import coordination.core.cable.Insulation;
 import coordination.core.cable.ThermalMethod;
+import coordination.core.curve.DeviceKind;
 import coordination.core.curve.ProtectiveDevice;
+import coordination.core.curve.TimeCurrentCurve;
 import coordination.core.curve.RandomDevices;
 import java.util.Arrays;
 import java.util.SplittableRandom;
@@ -164,6 +166,24 @@ class EngineAgainstSamplingTest {
         return Math.max(s, 1e-6);
     }
 
+    /**
+     * The IEC 60269-1 energy comparison, computed here on its own: the upstream fuse's pre-arcing
+     * energy (stated, or I² times its melting time) over the downstream let-through (stated, or I²
+     * times its clearing time); NaN where either is unknown.
+     */
+    private static double energyRatio(ProtectiveDevice up, ProtectiveDevice down, TimeCurrentCurve upCurve,
+            TimeCurrentCurve downCurve, double amps) {
+        if (up.kind() != DeviceKind.FUSE || down.kind() != DeviceKind.FUSE && down.letThrough().isEmpty()) {
+            return Double.NaN;
+        }
+        double u = up.preArcing().isPresent() && up.preArcing().get().isDefinedAt(amps) ? up.preArcing().get().a2s(amps)
+                : upCurve.isDefinedAt(amps) ? amps * amps * upCurve.seconds(amps) : Double.NaN;
+        double d = down.letThrough().isPresent() && amps >= down.letThroughFromAmps()
+                && down.letThrough().get().isDefinedAt(amps) ? down.letThrough().get().a2s(amps)
+                : downCurve.isDefinedAt(amps) ? amps * amps * downCurve.seconds(amps) : Double.NaN;
+        return u > 0 && Double.isFinite(u) && d > 0 && Double.isFinite(d) ? u / d : Double.NaN;
+    }
+
     @ParameterizedTest(name = "seed {0}")
     @ValueSource(longs = {505, 606, 707, 808})
     void gradingCheckAgreesWithDenseSampling(long seed) {
@@ -174,17 +194,27 @@ class EngineAgainstSamplingTest {
             double lo = Math.max(lowCurrent(up, r), lowCurrent(down, r));
             double hi = lo * Math.exp(r.nextDouble(0.5, 6));
             GradingCheckResult res = GradingCheck.check(up, down, lo, hi, GradingRequirement.intervalSeconds(0.3));
+            // IEEE 242 practice: between two relays the interval is measured to the downstream operating time
+            TimeCurrentCurve upCurve = up.minimumCurve();
+            TimeCurrentCurve downCurve = up.kind() == DeviceKind.RELAY && down.kind() == DeviceKind.RELAY
+                    ? down.slowestOperatingCurve() : down.maximumCurve();
             double min = Double.POSITIVE_INFINITY;
+            double minEnergy = Double.POSITIVE_INFINITY;
             double scale = 1e-6;
             boolean undefined = false;
             for (int i = 0; i < SAMPLES / 4; i++) {
                 double amps = i == SAMPLES / 4 - 1 ? hi : lo * Math.pow(hi / lo, (double) i / (SAMPLES / 4 - 1));
-                if (!up.minimumCurve().isDefinedAt(amps) || !down.maximumCurve().isDefinedAt(amps)) {
-                    undefined = true;
+                if (!upCurve.isDefinedAt(amps) || !downCurve.isDefinedAt(amps)) {
+                    double e = energyRatio(up, down, upCurve, downCurve, amps);
+                    if (Double.isNaN(e)) {
+                        undefined = true;
+                    } else {
+                        minEnergy = Math.min(minEnergy, e);
+                    }
                     continue;
                 }
-                double tu = up.minimumCurve().seconds(amps);
-                double td = down.maximumCurve().seconds(amps);
+                double tu = upCurve.seconds(amps);
+                double td = downCurve.seconds(amps);
                 if (Double.isInfinite(tu)) {
                     continue;
                 }
@@ -196,6 +226,10 @@ class EngineAgainstSamplingTest {
             }
             String label = "seed " + seed + " case " + n + " " + res;
             assertThat(label, !Double.isNaN(res.undefinedFromAmps()), is(undefined));
+            if (Double.isFinite(minEnergy)) {
+                assertThat(label, res.minEnergyRatio(), lessThanOrEqualTo(minEnergy * (1 + ROUNDING)));
+                assertThat(label, minEnergy / res.minEnergyRatio() - 1, lessThanOrEqualTo(SAMPLING_RESOLUTION));
+            }
             if (undefined || Double.isInfinite(min) || Double.isNaN(res.minIntervalSeconds())) {
                 if (min == Double.NEGATIVE_INFINITY) {
                     assertThat(label, res.minIntervalSeconds(), is(Double.NEGATIVE_INFINITY));

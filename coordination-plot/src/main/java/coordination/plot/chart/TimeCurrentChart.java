@@ -348,18 +348,22 @@ public final class TimeCurrentChart {
         }
         double[] yMaxCurve = times(max, xMaxCurve);
         double[] yMinCurve = times(min, xMinCurve);
-        // a tolerance band for fuses and breakers; a relay's operating curve is drawn as a thin line
-        boolean withBand = d.kind() != coordination.core.curve.DeviceKind.RELAY;
-        if (withBand && xMinCurve.length > 0 && !Arrays.equals(yMinCurve, yMaxCurve)) {
-            double[] px = new double[xMinCurve.length + xMaxCurve.length];
+        // the band: for fuses and breakers from fastest to total clearing; for a relay the spread of its
+        // operating time (tolerance, the band beyond its effective range, an assumed instantaneous time),
+        // with the clearing time drawn as a line of its own
+        TimeCurrentCurve upper = d.kind() == coordination.core.curve.DeviceKind.RELAY ? d.slowestOperatingCurve() : max;
+        double[] xUpper = grid(upper);
+        double[] yUpper = times(upper, xUpper);
+        if (xMinCurve.length > 0 && xUpper.length > 0 && !Arrays.equals(yMinCurve, yUpper)) {
+            double[] px = new double[xMinCurve.length + xUpper.length];
             double[] py = new double[px.length];
             for (int i = 0; i < xMinCurve.length; i++) {
                 px[i] = xMinCurve[i];
                 py[i] = yMinCurve[i];
             }
-            for (int i = 0; i < xMaxCurve.length; i++) {
-                px[xMinCurve.length + i] = xMaxCurve[xMaxCurve.length - 1 - i];
-                py[xMinCurve.length + i] = yMaxCurve[xMaxCurve.length - 1 - i];
+            for (int i = 0; i < xUpper.length; i++) {
+                px[xMinCurve.length + i] = xUpper[xUpper.length - 1 - i];
+                py[xMinCurve.length + i] = yUpper[xUpper.length - 1 - i];
             }
             double[][] outline = simplify(px, py);
             XYSeries band = chart.addSeries(unique(d.id() + " band"), outline[0], outline[1]);

@@ -4,6 +4,7 @@ import coordination.core.curve.DefiniteTimeStage;
 import coordination.core.curve.Fuse;
 import coordination.core.curve.HighCurrentBehaviour;
 import coordination.core.curve.InverseTimeStage;
+import coordination.core.curve.LetThroughEnergy;
 import coordination.core.curve.MiniatureBreaker;
 import coordination.core.curve.ProtectiveDevice;
 import coordination.core.curve.Relay;
@@ -33,7 +34,9 @@ final class SettingsText {
         } else if (device instanceof Fuse fuse) {
             lines.add("rating " + g(fuse.ratingAmps()) + " A, " + fuse.minimumCurve().amps().length
                     + " melting and " + fuse.maximumCurve().amps().length + " clearing points");
-            fuse.clearingI2tA2s().ifPresent(v -> lines.add("clearing I²t " + g(v) + " A²s"));
+            fuse.category().ifPresent(c -> lines.add("category " + c + fuse.series().map(x -> ", series " + x).orElse("")));
+            fuse.letThrough().ifPresent(e -> lines.add("let-through " + energy(e)));
+            fuse.preArcing().ifPresent(e -> lines.add("pre-arcing " + energy(e)));
         } else if (device instanceof TripUnitBreaker breaker) {
             TripUnitBreaker.Settings s = breaker.settings();
             lines.add("long time: Ir " + g(s.irAmps()) + " A, tr " + g(s.trSeconds()) + " s at 6 Ir");
@@ -48,9 +51,7 @@ final class SettingsText {
                     + " %");
         } else if (device instanceof MiniatureBreaker mcb) {
             lines.add("type " + mcb.type().name() + ", In " + g(mcb.ratedAmps()) + " A (IEC 60898-1)");
-            if (!Double.isNaN(mcb.letThroughI2tA2s())) {
-                lines.add("let-through I²t " + g(mcb.letThroughI2tA2s()) + " A²s");
-            }
+            mcb.letThrough().ifPresent(e -> lines.add("let-through " + energy(e)));
         }
         if (d.referralFactor() != 1.0) {
             lines.add("at " + g(d.voltageKv()) + " kV: currents x" + Quantities.significant(d.referralFactor(), 6)
@@ -73,11 +74,25 @@ final class SettingsText {
                 lines.add("definite time: pickup " + g(dt.pickupAmps()) + " A, delay " + g(dt.delaySeconds()) + " s");
             }
         }
+        if (!relay.tolerance().isNone()) {
+            lines.add("tolerance: time ±" + g(relay.tolerance().timeFraction() * 100) + " % or "
+                    + g(relay.tolerance().timeMinSeconds()) + " s, pickup ±" + g(relay.tolerance().pickupFraction() * 100)
+                    + " %");
+        }
         relay.currentTransformer().ifPresent(ct -> lines.add("CT " + g(ct.primaryAmps()) + "/" + g(ct.secondaryAmps())
                 + " A, settings in secondary A"));
         if (relay.breakerSeconds() > 0) {
             lines.add("breaker interrupting time " + g(relay.breakerSeconds()) + " s");
         }
+    }
+
+    private static String energy(LetThroughEnergy e) {
+        if (e.isConstant()) {
+            return "I²t " + g(e.energiesA2s()[0]) + " A²s (one value)";
+        }
+        double[] a = e.amps();
+        return "I²t " + e.amps().length + " points, " + Quantities.kiloamps(a[0], 3) + " to "
+                + Quantities.kiloamps(a[a.length - 1], 3) + " kA";
     }
 
     private static String g(double v) {

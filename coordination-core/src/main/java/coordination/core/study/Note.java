@@ -1,0 +1,22 @@
+package coordination.core.study;
+
+/**
+ * Something a reader of a result must know: an assumption the result rests on (a defaulted
+ * temperature, an assumed κ, a constant let-through) or a warning (a range that hides part of the
+ * problem). Notes never change a verdict or an exit code; sheets print them and reports list them.
+ *
+ * @param code a stable key for tools, e.g. {@code dc-offset-kappa-assumed}
+ * @param message one sentence for people
+ */
+public record Note(String code, String message) {
+    /**
+     * Validates the note.
+     *
+     * @throws IllegalArgumentException if a part is missing or empty
+     */
+    public Note {
+        if (code == null || code.isEmpty() || message == null || message.isEmpty()) {
+            throw new IllegalArgumentException("note: found an empty code or message - both must be given");
+        }
+    }
+}

@@ -1,0 +1,92 @@
+package coordination.core.study;
+
+import coordination.core.cable.CableThermalLimit;
+import coordination.core.curve.Fuse;
+import coordination.core.internal.Checks;
+import coordination.core.margin.CableCheckResult;
+import coordination.core.margin.CheckResult;
+import coordination.core.margin.GradingRequirement;
+import coordination.core.margin.ThermalRegion;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Optional;
+
+/** The assumptions each check rests on and the warnings its context gives, for the report and the sheet. */
+final class StudyNotes {
+    private StudyNotes() {
+    }
+
+    static StudyReport.CheckNotes of(Study study, Study.StudyCheck spec, CheckResult result) {
+        List<Note> assumptions = new ArrayList<>();
+        List<Note> warnings = new ArrayList<>();
+        if (spec instanceof Study.CableCheckSpec c) {
+            cable(study, c, (CableCheckResult) result, assumptions);
+        } else if (spec instanceof Study.GradingCheckSpec g) {
+            assumptions.addAll(study.device(g.upstream()).assumptions());
+            for (Note n : study.device(g.downstream()).assumptions()) {
+                if (!assumptions.contains(n)) {
+                    assumptions.add(n);
+                }
+            }
+            grading(study, g, warnings);
+        }
+        return new StudyReport.CheckNotes(assumptions, warnings);
+    }
+
+    private static void cable(Study study, Study.CableCheckSpec c, CableCheckResult r, List<Note> out) {
+        Study.StudyCable cable = study.cable(c.cable());
+        CableThermalLimit l = cable.limit();
+        String who = "cable '" + l.id() + "'";
+        if (cable.initialSource() == Study.TemperatureSource.INSULATION_DEFAULT) {
+            out.add(new Note("initial-temperature-assumed", who + ": initial temperature "
+                    + Checks.format(l.initialCelsius()) + " °C assumed, the maximum operating temperature of "
+                    + l.insulation().key() + " (" + l.method().key() + ")"));
+        }
+        if (cable.finalSource() == Study.TemperatureSource.INSULATION_DEFAULT) {
+            out.add(new Note("final-temperature-assumed", who + ": final temperature " + Checks.format(l.finalCelsius())
+                    + " °C assumed, the short-circuit limit of " + l.insulation().key() + " (" + l.method().key() + ")"));
+        }
+        if (c.dcSource() == Study.DcSource.ASSUMED_KAPPA) {
+            out.add(new Note("dc-offset-kappa-assumed", "κ " + Checks.format(c.dcOffset().orElseThrow().kappa())
+                    + " assumed for the DC-offset heating (common practice); state dc_offset: {kappa} or {x_r}"));
+        } else if (c.dcSource() == Study.DcSource.NONE) {
+            out.add(new Note("dc-offset-off", "DC-offset heating not counted (dc_offset: none)"));
+        }
+        if (r.regions().stream().anyMatch(g -> g.method().equals(ThermalRegion.OUTSIDE_IEC_60949))) {
+            out.add(new Note("outside-iec-60949", who + ": beyond 5 s, outside IEC 60949's scope, no heat loss is"
+                    + " credited; the cable withstands 5 s or its adiabatic time, whichever is longer"));
+        }
+        out.addAll(study.device(c.device()).assumptions());
+    }
+
+    private static void grading(Study study, Study.GradingCheckSpec g, List<Note> out) {
+        for (Study.StudyCheck other : study.checks()) {
+            if (other instanceof Study.CableCheckSpec c && c.device().equals(g.downstream())
+                    && (c.range().fromAmps() < g.range().fromAmps() || c.range().toAmps() > g.range().toAmps())) {
+                out.add(new Note("grading-range-narrower", "the grading range " + ka(g.range()) + " is narrower than"
+                        + " the " + ka(c.range()) + " of cable '" + c.cable() + "' below '" + g.downstream()
+                        + "': selectivity outside it is not checked"));
+            }
+        }
+        if (g.requirement() instanceof GradingRequirement.RatingRatio) {
+            Optional<Fuse> up = fuse(study, g.upstream());
+            Optional<Fuse> down = fuse(study, g.downstream());
+            boolean oneGgSeries = up.isPresent() && down.isPresent()
+                    && up.get().category().equals(Optional.of("gG")) && down.get().category().equals(Optional.of("gG"))
+                    && up.get().series().isPresent() && up.get().series().equals(down.get().series());
+            if (!oneGgSeries) {
+                out.add(new Note("rating-ratio-outside-gg-series", "the rating-ratio rule holds for gG fuses of one"
+                        + " series (common practice); state category: gG and one series for both, or grade by time"
+                        + " and energy"));
+            }
+        }
+    }
+
+    private static Optional<Fuse> fuse(Study study, String id) {
+        return study.device(id).device() instanceof Fuse f ? Optional.of(f) : Optional.empty();
+    }
+
+    private static String ka(Study.CurrentRange r) {
+        return Checks.format(r.fromAmps() / 1000) + " to " + Checks.format(r.toAmps() / 1000) + " kA";
+    }
+}

@@ -1,0 +1,31 @@
+package coordination.core.curve;
+
+import static org.hamcrest.MatcherAssert.assertThat;
+import static org.hamcrest.Matchers.closeTo;
+
+import org.junit.jupiter.api.Test;
+
+/** The fast and slow edges of relay stages under an IEC 60255-151 tolerance. */
+class RelayEdgesTest {
+    /** The toleranced edges invert exactly: the current found for a time gives that time back. */
+    @Test
+    void tolerancedEdgesInvertExactly() {
+        java.util.SplittableRandom r = new java.util.SplittableRandom(11);
+        for (int n = 0; n < 200; n++) {
+            InverseTimeStage s = InverseTimeStage.of(InverseTimeFamily.values()[r.nextInt(7)], 100,
+                    r.nextDouble(0.05, 1)).withHighCurrent(HighCurrentBehaviour.FOLLOW_EQUATION, 20);
+            RelayTolerance tol = new RelayTolerance(r.nextDouble(0, 0.1), r.nextDouble(0, 0.05), 0);
+            for (Edge e : Edge.values()) {
+                TimeCurrentCurve edge = s.edge(e, tol);
+                for (double amps : new double[] {150, 400, 1500, 9000}) {
+                    double t = edge.seconds(amps);
+                    if (t > 0) {
+                        double back = ((Invertible) edge).currentAtSeconds(t);
+                        assertThat(edge + " at " + amps, back, closeTo(amps, amps * 1e-9));
+                    }
+                }
+            }
+        }
+    }
+
+}
