@@ -74,6 +74,17 @@ class StudyNotesTest {
         assertThat(wide.notes().get(1).warnings(), is(List.of()));
     }
 
+    /** The 1.6:1 rating rule holds for gG fuses of one series (common practice): elsewhere it is warned about. */
+    @Test
+    void aRatingRatioOutsideGgFusesOfOneSeriesIsWarnedAbout() throws Exception {
+        String pair = java.nio.file.Files.readString(java.nio.file.Path.of("../spec/cases/valid/fuse-energies-by-points.yaml"));
+        StudyReport same = StudyReport.evaluate(StudyReader.parse("p.yaml", "p", pair));
+        assertThat(codes(same.notes().get(0).warnings()), not(hasItem("rating-ratio-outside-gg-series")));
+        StudyReport other = StudyReport.evaluate(StudyReader.parse("p.yaml", "p", pair.replaceFirst("series: NH-A",
+                "series: NH-B")));
+        assertThat(codes(other.notes().get(0).warnings()), hasItem("rating-ratio-outside-gg-series"));
+    }
+
     /**
      * ICEA P-32-382 takes 75 °C / 150 °C for thermoplastic insulation (from memory), not IEC's 70 / 160:
      * with its own equation, (I/A)² t = 0.0297 log10((T2 + 234) / (T1 + 234)), the I²t is about 16 % lower
