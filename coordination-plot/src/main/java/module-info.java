@@ -14,7 +14,6 @@ module coordination.plot {
     requires pngencoder;
     requires static info.picocli;
 
-    exports coordination.plot;
     exports coordination.plot.chart;
     exports coordination.plot.cli;
     exports coordination.plot.sheet;

@@ -41,7 +41,7 @@ class ArgumentValidationTest {
         for (double reset : new double[] {-1, Double.POSITIVE_INFINITY}) {
             refused("custom: reset constant: found " + (reset < 0 ? "-1" : "infinity") + " s - must be a finite number"
                     + " above 0", () -> new InverseTimeStage(10, 0, 1, reset, 100, 1, MultiplierKind.TMS,
-                    new SettingRange(0.05, 1), HighCurrentBehaviour.FOLLOW_EQUATION, 20, "custom"));
+                    new SettingRange(0.05, 1, 0.01), HighCurrentBehaviour.FOLLOW_EQUATION, 20, "custom"));
         }
     }
 
@@ -61,11 +61,15 @@ class ArgumentValidationTest {
     }
 
     @Test
-    void aGradingLinkWithoutAValidMultiplierIsRefused() {
-        refused("grading link 'R': smallest multiplier: found NaN - must be a finite number above 0",
-                () -> new RadialGrading.Link(RELAY, 1, null, MarginRequirement.seconds(0), 100, 1000, Double.NaN, 1));
-        refused("grading link 'R': largest multiplier 0.1 is below the smallest 0.5 - must be at or above it",
-                () -> new RadialGrading.Link(RELAY, 1, null, MarginRequirement.seconds(0), 100, 1000, 0.5, 0.1));
+    void aGradingLinkWithoutAValidRangeOrCableIsRefused() {
+        Relay si = Relay.of("S", coordination.core.curve.InverseTimeStage.of(
+                coordination.core.curve.InverseTimeFamily.IEC_STANDARD_INVERSE, 100, 0.1));
+        refused("grading link 'S': grading range: lowest current: found NaN A - must be a finite number above 0",
+                () -> new RadialGrading.Link(si, 1, java.util.Optional.empty(), new GradingRequirement.Interval(0.3, false), Double.NaN, 1000, java.util.List.of()));
+        refused("grading link 'S': cable: found null - must be given",
+                () -> new RadialGrading.Link(si, 1, null, new GradingRequirement.Interval(0.3, false), 100, 1000, java.util.List.of()));
+        refused("relay 'R': no inverse-time stage to grade",
+                () -> new RadialGrading.Link(RELAY, 1, java.util.Optional.empty(), new GradingRequirement.Interval(0.3, false), 100, 1000, java.util.List.of()));
     }
 
     @Test
@@ -78,7 +82,7 @@ class ArgumentValidationTest {
         refused("cable: id: found null - must be given", () -> new CableThermalLimit(null, ConductorMaterial.COPPER,
                 Insulation.XLPE, 35, 1, 90, 250, ThermalMethod.ADIABATIC));
         refused("inverse-time stage: label: found null - must be given", () -> new InverseTimeStage(0.14, 0, 0.02,
-                Double.NaN, 100, 0.1, MultiplierKind.TMS, new SettingRange(0.05, 1),
+                Double.NaN, 100, 0.1, MultiplierKind.TMS, new SettingRange(0.05, 1, 0.01),
                 HighCurrentBehaviour.FOLLOW_EQUATION, 20, null));
     }
 }

@@ -6,10 +6,10 @@ package coordination.core.curve;
  * the kind only decides the name and the setting range a relay offers when the study states none.
  */
 public enum MultiplierKind {
-    /** Time multiplier setting, commonly 0.05 to 1 (from memory). */
-    TMS("tms", new SettingRange(0.05, 1.0)),
-    /** Time dial, commonly 0.5 to 15 (from memory). */
-    TIME_DIAL("time_dial", new SettingRange(0.5, 15.0));
+    /** Time multiplier setting, commonly 0.05 to 1 in steps of 0.01 (common practice, from memory). */
+    TMS("tms", new SettingRange(0.05, 1.0, 0.01)),
+    /** Time dial, commonly 0.5 to 15 in steps of 0.1 (common practice, from memory). */
+    TIME_DIAL("time_dial", new SettingRange(0.5, 15.0, 0.1));
 
     private final String key;
     private final SettingRange defaultRange;
@@ -32,5 +32,10 @@ public enum MultiplierKind {
     /** @return the study-file key of the setting's range, {@code tms_range} or {@code time_dial_range} */
     public String rangeKey() {
         return key + "_range";
+    }
+
+    /** @return the study-file key of the setting's step, {@code tms_step} or {@code time_dial_step} */
+    public String stepKey() {
+        return key + "_step";
     }
 }

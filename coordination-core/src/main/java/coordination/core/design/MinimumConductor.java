@@ -57,25 +57,39 @@ public final class MinimumConductor {
      */
     public static Result solve(ProtectiveDevice device, CableThermalLimit template, boolean defaultTemperatures,
             double fromAmps, double toAmps, MarginRequirement requirement) {
+        return solve(device, new CableDuty(template, fromAmps, toAmps, requirement, java.util.Optional.empty()),
+                defaultTemperatures);
+    }
+
+    /**
+     * Solves for the smallest conductor under a cable check's duty, DC-offset heating included.
+     *
+     * @param device the protecting device
+     * @param duty the check: its cable gives the id, material, insulation, parallel count, method and,
+     *     if stated, the temperatures; its size is ignored
+     * @param defaultTemperatures whether the final temperature follows the insulation's default for each size
+     * @return the result
+     */
+    public static Result solve(ProtectiveDevice device, CableDuty duty, boolean defaultTemperatures) {
+        CableThermalLimit template = duty.cable();
         double split = Insulation.PVC_LARGE_SECTION_MM2;
         double[][] regimes = defaultTemperatures ? new double[][] {{MIN_MM2, split}, {split * (1 + 1e-12), MAX_MM2}}
                 : new double[][] {{MIN_MM2, MAX_MM2}};
         CableCheckResult last = null;
         for (double[] regime : regimes) {
-            CableCheckResult atTop = check(device, template, defaultTemperatures, regime[1], fromAmps, toAmps, requirement);
+            CableCheckResult atTop = check(device, duty, defaultTemperatures, regime[1]);
             last = atTop;
             if (!atTop.pass()) {
                 continue;
             }
             double s;
-            if (check(device, template, defaultTemperatures, regime[0], fromAmps, toAmps, requirement).pass()) {
+            if (check(device, duty, defaultTemperatures, regime[0]).pass()) {
                 s = regime[0];
             } else {
-                s = Boundary.solve(x -> check(device, template, defaultTemperatures, x, fromAmps, toAmps,
-                        requirement).pass(), regime[1], regime[0]);
+                s = Boundary.solve(x -> check(device, duty, defaultTemperatures, x).pass(), regime[1], regime[0]);
             }
             double mm2 = s;
-            CableCheckResult at = check(device, template, defaultTemperatures, mm2, fromAmps, toAmps, requirement);
+            CableCheckResult at = check(device, duty, defaultTemperatures, mm2);
             return new Result(mm2, ConductorSizes.nextIecSizeMm2(mm2), ConductorSizes.nextAwgOrKcmil(mm2), at, null);
         }
         String why = !Double.isNaN(last.notClearedFromAmps()) || !Double.isNaN(last.undefinedFromAmps())
@@ -87,6 +101,10 @@ public final class MinimumConductor {
     static CableCheckResult check(ProtectiveDevice device, CableThermalLimit template, boolean defaults, double mm2,
             double fromAmps, double toAmps, MarginRequirement requirement) {
         return CableCheck.check(device, sized(template, defaults, mm2), fromAmps, toAmps, requirement);
+    }
+
+    private static CableCheckResult check(ProtectiveDevice device, CableDuty duty, boolean defaults, double mm2) {
+        return duty.withCable(sized(duty.cable(), defaults, mm2)).check(device);
     }
 
     static CableThermalLimit sized(CableThermalLimit t, boolean defaults, double mm2) {

@@ -5,7 +5,6 @@ import coordination.core.curve.InverseTimeStage;
 import coordination.core.curve.ProtectiveDevice;
 import coordination.core.curve.Relay;
 import coordination.core.curve.TimeCurrentCurve;
-import coordination.core.margin.CableCheck;
 import coordination.core.margin.CableCheckResult;
 import coordination.core.margin.MarginRequirement;
 import java.util.ArrayList;
@@ -67,9 +66,53 @@ public final class SlowestSetting {
      */
     public static Result largestMultiplier(Relay relay, int index, double referFactor, CableThermalLimit cable,
             double fromAmps, double toAmps, MarginRequirement requirement, double maxMultiplier) {
+        return largestMultiplier(relay, index, referFactor, new CableDuty(cable, fromAmps, toAmps, requirement,
+                java.util.Optional.empty()), maxMultiplier);
+    }
+
+    /**
+     * The largest time multiplier of a stage that still passes a cable check's duty.
+     *
+     * @param relay the relay as set
+     * @param index the stage's index
+     * @param referFactor current scale to the cable's voltage base
+     * @param duty the cable check
+     * @param maxMultiplier the search's ceiling
+     * @return the result
+     */
+    public static Result largestMultiplier(Relay relay, int index, double referFactor, CableDuty duty,
+            double maxMultiplier) {
         InverseTimeStage s = stage(relay, index);
         return search(m -> with(relay, index, s.withMultiplier(m)).referredBy(referFactor), s.multiplier(),
-                maxMultiplier, cable, fromAmps, toAmps, requirement, "multiplier");
+                maxMultiplier, duty, "multiplier");
+    }
+
+    /**
+     * The smallest time multiplier with which a stage rides through currents it must carry: at
+     * each point the relay's fastest operating time is at least the point's time.
+     *
+     * @param relay the relay as set
+     * @param index the stage's index
+     * @param points the currents to ride through, primary amperes at the relay's voltage
+     * @param maxMultiplier the largest multiplier the relay offers
+     * @return the smallest multiplier, or empty if none up to the largest rides through
+     */
+    public static java.util.OptionalDouble smallestMultiplierRidingThrough(Relay relay, int index, List<NoTrip> points,
+            double maxMultiplier) {
+        InverseTimeStage s = stage(relay, index);
+        java.util.function.DoublePredicate rides = m -> {
+            Relay r = with(relay, index, s.withMultiplier(m));
+            return points.stream().allMatch(p -> r.minimumCurve().seconds(p.currentAmps()) >= p.seconds());
+        };
+        if (!rides.test(maxMultiplier)) {
+            return java.util.OptionalDouble.empty();
+        }
+        double floor = s.multiplier() * 1e-6;
+        if (rides.test(floor)) {
+            return java.util.OptionalDouble.of(floor);
+        }
+        double m = Boundary.solve(v -> !rides.test(v), floor, maxMultiplier);
+        return java.util.OptionalDouble.of(m * (1 + 2 * Boundary.RELATIVE));
     }
 
     /**
@@ -87,23 +130,38 @@ public final class SlowestSetting {
      */
     public static Result largestPickup(Relay relay, int index, double referFactor, CableThermalLimit cable,
             double fromAmps, double toAmps, MarginRequirement requirement) {
-        InverseTimeStage s = stage(relay, index);
-        double ceiling = fromAmps / referFactor / relay.ctRatio();
-        return search(p -> with(relay, index, s.withPickupAmps(p)).referredBy(referFactor), s.pickupAmps(), ceiling,
-                cable, fromAmps, toAmps, requirement, "pickup");
+        return largestPickup(relay, index, referFactor, new CableDuty(cable, fromAmps, toAmps, requirement,
+                java.util.Optional.empty()));
     }
 
-    private static Result search(DoubleFunction<ProtectiveDevice> device, double now, double ceiling,
-            CableThermalLimit cable, double fromAmps, double toAmps, MarginRequirement requirement, String what) {
+    /**
+     * The largest pickup of a stage that still passes a cable check's duty; it stays below the
+     * lowest fault current referred to the relay's settings.
+     *
+     * @param relay the relay as set (pickups in the relay's own units)
+     * @param index the stage's index
+     * @param referFactor current scale to the cable's voltage base
+     * @param duty the cable check
+     * @return the result, the pickup in the stage's own units
+     */
+    public static Result largestPickup(Relay relay, int index, double referFactor, CableDuty duty) {
+        InverseTimeStage s = stage(relay, index);
+        double ceiling = duty.fromAmps() / referFactor / relay.ctRatio();
+        return search(p -> with(relay, index, s.withPickupAmps(p)).referredBy(referFactor), s.pickupAmps(), ceiling,
+                duty, "pickup");
+    }
+
+    private static Result search(DoubleFunction<ProtectiveDevice> device, double now, double ceiling, CableDuty duty,
+            String what) {
         double floor = now * 1e-6;
-        CableCheckResult atFloor = CableCheck.check(device.apply(floor), cable, fromAmps, toAmps, requirement);
+        CableCheckResult atFloor = duty.check(device.apply(floor));
         if (!atFloor.pass()) {
-            return new Result(now, Double.NaN, CableCheck.check(device.apply(now), cable, fromAmps, toAmps, requirement),
+            return new Result(now, Double.NaN, duty.check(device.apply(now)),
                     "no " + what + " passes: even near zero the check " + atFloor.reason());
         }
-        CableCheckResult atCeiling = CableCheck.check(device.apply(ceiling), cable, fromAmps, toAmps, requirement);
-        double best = atCeiling.pass() ? ceiling : Boundary.solve(v -> CableCheck.check(device.apply(v), cable,
-                fromAmps, toAmps, requirement).pass(), floor, ceiling);
-        return new Result(now, best, CableCheck.check(device.apply(best), cable, fromAmps, toAmps, requirement), null);
+        CableCheckResult atCeiling = duty.check(device.apply(ceiling));
+        double best = atCeiling.pass() ? ceiling : Boundary.solve(v -> duty.check(device.apply(v)).pass(), floor,
+                ceiling);
+        return new Result(now, best, duty.check(device.apply(best)), null);
     }
 }

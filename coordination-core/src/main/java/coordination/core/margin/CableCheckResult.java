@@ -1,5 +1,6 @@
 package coordination.core.margin;
 
+import coordination.core.Quantities;
 import coordination.core.internal.Checks;
 import java.util.Arrays;
 import java.util.List;
@@ -62,19 +63,21 @@ public record CableCheckResult(
     @Override
     public String reason() {
         if (!Double.isNaN(undefinedFromAmps)) {
-            return "the curve of '" + device + "' has no value from " + Checks.format(undefinedFromAmps) + " A to "
-                    + Checks.format(undefinedToAmps) + " A";
+            return "the curve of '" + device + "' has no value from " + Quantities.current(undefinedFromAmps, 3)
+                    + " to "
+                    + Quantities.current(undefinedToAmps, 3);
         }
         if (!Double.isNaN(notClearedFromAmps)) {
-            return "'" + device + "' does not clear from " + Checks.format(notClearedFromAmps) + " A to "
-                    + Checks.format(notClearedToAmps) + " A";
+            return "'" + device + "' does not clear from " + Quantities.current(notClearedFromAmps, 3) + " to "
+                    + Quantities.current(notClearedToAmps, 3);
         }
         if (minMarginSeconds == Double.NEGATIVE_INFINITY) {
-            return "'" + device + "' slows without bound towards its pickup at " + Checks.format(minMarginAtAmps)
+            return "'" + device + "' slows without bound towards its pickup at " + Quantities.significant(minMarginAtAmps, 3)
                     + " A: no margin there";
         }
-        String where = "minimum margin " + Checks.format(minMarginSeconds) + " s at " + Checks.format(minMarginAtAmps)
-                + " A, ratio " + Checks.format(minRatio) + " at " + Checks.format(minRatioAtAmps) + " A";
+        String where = "minimum margin " + Quantities.significant(minMarginSeconds, 3) + " s at "
+                + Quantities.current(minMarginAtAmps, 3) + ", ratio " + Quantities.significant(minRatio, 3) + " at "
+                + Quantities.current(minRatioAtAmps, 3);
         return (pass ? "meets " : "fails ") + requirement + ": " + where;
     }
 

@@ -1,5 +1,6 @@
 package coordination.core.margin;
 
+import coordination.core.Quantities;
 import coordination.core.internal.Checks;
 import java.util.Arrays;
 import java.util.Objects;
@@ -68,25 +69,26 @@ public record GradingCheckResult(
     @Override
     public String reason() {
         if (!Double.isNaN(undefinedFromAmps)) {
-            return "a curve has no value from " + Checks.format(undefinedFromAmps) + " A to "
-                    + Checks.format(undefinedToAmps) + " A";
+            return "a curve has no value from " + Quantities.current(undefinedFromAmps, 3) + " to "
+                    + Quantities.current(undefinedToAmps, 3);
         }
         String energy = Double.isNaN(minEnergyRatio) ? "" : "pre-arcing to let-through energy at least "
-                + Checks.format(minEnergyRatio) + " at " + Checks.format(minEnergyRatioAtAmps) + " A";
+                + Quantities.significant(minEnergyRatio, 3) + " at " + Quantities.current(minEnergyRatioAtAmps, 3);
         if (Double.isNaN(minIntervalSeconds) && energy.isEmpty()) {
             return "neither device operates in the range";
         }
         if (minIntervalSeconds == Double.NEGATIVE_INFINITY) {
             return "'" + upstream + "' operates where '" + downstream + "' does not or slows without bound, at "
-                    + Checks.format(minIntervalAtAmps) + " A";
+                    + Quantities.current(minIntervalAtAmps, 3);
         }
-        String s = Double.isNaN(minIntervalSeconds) ? "" : "minimum interval " + Checks.format(minIntervalSeconds)
-                + " s at " + Checks.format(minIntervalAtAmps) + " A";
+        String s = Double.isNaN(minIntervalSeconds) ? "" : "minimum interval "
+                + Quantities.significant(minIntervalSeconds, 3)
+                + " s at " + Quantities.current(minIntervalAtAmps, 3);
         if (!energy.isEmpty()) {
             s += (s.isEmpty() ? "" : "; ") + energy;
         }
         if (requirement instanceof GradingRequirement.RatingRatio) {
-            s += ", rating ratio " + Checks.format(ratingRatio);
+            s += ", rating ratio " + Quantities.significant(ratingRatio, 3);
         }
         return (pass ? "meets " : "fails ") + requirement + ": " + s;
     }

@@ -13,7 +13,6 @@ import coordination.core.curve.TimeCurrentCurve;
 import coordination.core.curve.TripUnitBreaker;
 import coordination.core.design.MinimumConductor;
 import coordination.core.design.RadialGrading;
-import coordination.core.design.SlowestSetting;
 import coordination.core.margin.CableCheckResult;
 import coordination.core.margin.CheckResult;
 import coordination.core.margin.GradingCheckResult;
@@ -39,8 +38,37 @@ public final class ReportWriter {
      */
     public static String write(StudyReport report) {
         JsonOut j = new JsonOut();
-        report(j, report);
+        report(j, report, null);
         return j.finish();
+    }
+
+    /**
+     * The report of one study with its sensitivity run as {@code sensitivity}.
+     *
+     * @param run the study as given and widened
+     * @return the JSON text
+     */
+    public static String write(Sensitivity run) {
+        JsonOut j = new JsonOut();
+        report(j, run.nominal(), run);
+        return j.finish();
+    }
+
+    /**
+     * The reports of several studies with their sensitivity runs, in the form of
+     * {@link #write(List, boolean)}.
+     *
+     * @param runs the studies as given and widened
+     * @param pass whether every study was read and every check passes as given
+     * @return the JSON text
+     */
+    public static String writeSensitivities(List<Sensitivity> runs, boolean pass) {
+        JsonOut j = new JsonOut().startObject();
+        j.integer("format", StudyReport.FORMAT).bool("pass", pass).startArray("studies");
+        for (Sensitivity r : runs) {
+            report(j, r.nominal(), r);
+        }
+        return j.endArray().endObject().finish();
     }
 
     /**
@@ -54,7 +82,7 @@ public final class ReportWriter {
         JsonOut j = new JsonOut().startObject();
         j.integer("format", StudyReport.FORMAT).bool("pass", pass).startArray("studies");
         for (StudyReport r : reports) {
-            report(j, r);
+            report(j, r, null);
         }
         return j.endArray().endObject().finish();
     }
@@ -79,20 +107,33 @@ public final class ReportWriter {
      */
     public static String write(StudyDesign design) {
         JsonOut j = new JsonOut().startObject();
-        j.text("study", design.study().name()).text("title", design.study().title());
+        j.integer("format", StudyReport.FORMAT).text("study", design.study().name()).text("title",
+                design.study().title());
         j.startArray("cable_checks");
         for (StudyDesign.CableAid a : design.cableAids()) {
             cableAid(j, a);
         }
         j.endArray().startArray("grading_chains");
         for (StudyDesign.GradingChain c : design.chains()) {
-            j.startObject().number("interval_s", c.intervalSeconds()).startArray("relays");
-            for (RadialGrading.Setting s : c.relays()) {
-                j.startObject().text("relay", s.id()).number("now", s.currentMultiplier())
-                        .number("proposed", s.multiplier())
-                        .number("min_interval_s", s.grading() == null ? Double.NaN : s.grading().minIntervalSeconds())
-                        .number("cable_min_margin_s", s.cable() == null ? Double.NaN : s.cable().minMarginSeconds())
-                        .text("problem", s.problem()).endObject();
+            j.startObject().startArray("relays");
+            for (int i = 0; i < c.relays().size(); i++) {
+                RadialGrading.Setting s = c.relays().get(i);
+                GradingRequirement.Interval interval = c.intervals().get(i);
+                j.startObject().text("relay", s.id()).number("interval_s", interval.seconds())
+                        .text("interval_to", interval.toClearingTime() ? "clearing-time" : "operating-time")
+                        .number("now", s.currentMultiplier()).number("exact", s.exact().orElse(Double.NaN))
+                        .number("proposed", s.proposed().orElse(Double.NaN)).number("step", s.range().step())
+                        .text("binding", s.binding().words()).text("binding_device", s.bindingDevice().orElse(null))
+                        .startArray("gradings");
+                for (GradingCheckResult g : s.gradings()) {
+                    j.startObject().text("upstream", g.upstream()).text("downstream", g.downstream())
+                            .text("requirement", g.requirement().toString()).bool("pass", g.pass())
+                            .number("min_interval_s", g.minIntervalSeconds()).number("at_a", g.minIntervalAtAmps())
+                            .endObject();
+                }
+                j.endArray().number("cable_min_margin_s", s.cable().map(CableCheckResult::minMarginSeconds)
+                                .orElse(Double.NaN))
+                        .text("problem", s.problem().orElse(null)).endObject();
             }
             j.endArray().endObject();
         }
@@ -127,7 +168,7 @@ public final class ReportWriter {
 
     // --------------------------------------------------------------------------------------- report
 
-    private static void report(JsonOut j, StudyReport report) {
+    private static void report(JsonOut j, StudyReport report, Sensitivity run) {
         Study study = report.study();
         j.startObject().integer("format", StudyReport.FORMAT).text("study", study.name()).text("title", study.title())
                 .text("revision", study.revision().isEmpty() ? null : study.revision())
@@ -148,6 +189,15 @@ public final class ReportWriter {
         }
         j.endArray();
         notes(j, "warnings", report.warnings());
+        if (run != null) {
+            j.startObject("sensitivity").number("min_factor", run.minFactor()).number("max_factor", run.maxFactor())
+                    .startArray("flips");
+            for (int i : run.flips()) {
+                CheckResult w = run.widened().results().get(i);
+                j.startObject().integer("check", i).bool("pass", w.pass()).text("reason", w.reason()).endObject();
+            }
+            j.endArray().endObject();
+        }
         j.endObject();
     }
 
@@ -343,24 +393,36 @@ public final class ReportWriter {
         MinimumConductor.Result size = a.conductor();
         CableThermalLimit limit = a.cable().limit();
         j.startObject("conductor").text("now", a.cable().sizeText()).number("now_mm2", limit.sizeMm2())
-                .integer("parallel", limit.parallel()).number("smallest_mm2", size.sizeMm2())
+                .integer("parallel", limit.parallel()).bool("per_conductor", limit.parallel() > 1)
+                .number("smallest_mm2", size.sizeMm2())
                 .number("next_iec_mm2", size.found() ? size.iecSizeMm2() : Double.NaN)
-                .text("next_awg_kcmil", size.found() ? size.awgOrKcmil() : null).text("problem", size.reason())
+                .text("next_awg_kcmil", size.found() ? size.awgOrKcmil() : null)
+                .text("binding", size.found() ? "the cable's margin" : null)
+                .number("binding_at_a", !size.found() || size.check() == null ? Double.NaN
+                        : size.check().requirement() instanceof MarginRequirement.Ratio ? size.check().minRatioAtAmps()
+                        : size.check().minMarginAtAmps())
+                .text("problem", size.reason())
                 .endObject();
         if (a.stage().isPresent()) {
             StudyDesign.StageAid s = a.stage().get();
+            StudyDesign.MultiplierAid m = s.multiplier();
             j.text("stage", s.stage().label());
-            j.startObject(s.stage().multiplierKind().key());
-            setting(j, s.multiplier());
-            j.bool("at_relay_limit", s.multiplierAtRelayLimit()).endObject();
-            j.startObject("pickup_a");
-            setting(j, s.pickup());
-            j.endObject();
+            j.startObject("multiplier").text("kind", m.kind().key()).number("now", m.now())
+                    .pair("range", m.range().min(), m.range().max()).number("step", m.range().step())
+                    .number("largest", m.largest().orElse(Double.NaN))
+                    .number("smallest_for_no_trip", m.smallest().orElse(Double.NaN))
+                    .number("proposed", m.proposed().orElse(Double.NaN)).text("binding", m.binding().words())
+                    .text("problem", m.problem().orElse(null)).endObject();
+            StudyDesign.PickupAid p = s.pickup();
+            double ct = p.ctRatio();
+            j.startObject("pickup").text("unit", p.secondary() ? "A secondary" : "A").number("now", p.now())
+                    .number("now_primary_a", p.now() * ct).number("step", p.step())
+                    .number("largest", p.largest().orElse(Double.NaN))
+                    .number("lowest_for_load", p.lowestForLoad().orElse(Double.NaN))
+                    .number("proposed", p.proposed().orElse(Double.NaN))
+                    .number("proposed_primary_a", p.proposed().orElse(Double.NaN) * ct)
+                    .text("binding", p.binding().words()).text("problem", p.problem().orElse(null)).endObject();
         }
         j.endObject();
-    }
-
-    private static void setting(JsonOut j, SlowestSetting.Result r) {
-        j.number("now", r.current()).number("largest", r.largest()).text("problem", r.reason());
     }
 }

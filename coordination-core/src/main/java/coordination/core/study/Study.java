@@ -2,12 +2,14 @@ package coordination.core.study;
 
 import coordination.core.cable.CableThermalLimit;
 import coordination.core.curve.ProtectiveDevice;
+import coordination.core.design.NoTrip;
 import coordination.core.internal.Checks;
 import coordination.core.margin.DcOffset;
 import coordination.core.margin.GradingRequirement;
 import coordination.core.margin.MarginRequirement;
 import java.util.List;
 import java.util.Optional;
+import java.util.OptionalDouble;
 
 /**
  * A coordination study read from a study file: its cables, devices and the checks to run, with
@@ -32,6 +34,36 @@ public record Study(String name, String title, double voltageKv, double frequenc
         cables = List.copyOf(cables);
         devices = List.copyOf(devices);
         checks = List.copyOf(checks);
+    }
+
+    /**
+     * The study with every check's current range scaled: the lowest current times one factor, the
+     * highest times the other. Cables' stated fault ranges scale alike.
+     *
+     * @param minFactor positive factor on the lowest currents
+     * @param maxFactor positive factor on the highest currents
+     * @return the scaled study
+     * @throws IllegalArgumentException if a scaled range is inverted or a factor is not positive
+     */
+    public Study withFaultFactors(double minFactor, double maxFactor) {
+        Checks.positive("fault factor: minimum", minFactor, "");
+        Checks.positive("fault factor: maximum", maxFactor, "");
+        List<StudyCheck> scaled = new java.util.ArrayList<>();
+        for (StudyCheck c : checks) {
+            if (c instanceof CableCheckSpec cc) {
+                scaled.add(new CableCheckSpec(cc.cable(), cc.device(), cc.requirement(),
+                        cc.range().scaled(minFactor, maxFactor), cc.dcOffset(), cc.dcSource()));
+            } else if (c instanceof GradingCheckSpec g) {
+                scaled.add(new GradingCheckSpec(g.upstream(), g.downstream(), g.requirement(),
+                        g.range().scaled(minFactor, maxFactor)));
+            }
+        }
+        List<StudyCable> cs = new java.util.ArrayList<>();
+        for (StudyCable c : cables) {
+            cs.add(new StudyCable(c.limit(), c.sizeText(), c.fault().map(r -> r.scaled(minFactor, maxFactor)),
+                    c.initialSource(), c.finalSource()));
+        }
+        return new Study(name, title, voltageKv, frequencyHz, revision, date, page, cs, devices, scaled);
     }
 
     /** Sheet page sizes. */
@@ -82,6 +114,17 @@ public record Study(String name, String title, double voltageKv, double frequenc
         public CurrentRange {
             Checks.currentRange("current range", fromAmps, toAmps);
         }
+
+        /**
+         * The range widened or narrowed.
+         *
+         * @param minFactor factor on the lowest current
+         * @param maxFactor factor on the highest current
+         * @return the scaled range
+         */
+        public CurrentRange scaled(double minFactor, double maxFactor) {
+            return new CurrentRange(fromAmps * minFactor, toAmps * maxFactor);
+        }
     }
 
     /** Where a cable's conductor temperature came from. */
@@ -119,9 +162,10 @@ public record Study(String name, String title, double voltageKv, double frequenc
      * @param referralFactor the factor its currents are multiplied by at the study's reference voltage
      * @param referred the device with currents at the study's reference voltage
      * @param assumptions the defaults its model rests on, where the study states no value
+     * @param limits what a design proposal for its settings must respect
      */
     public record StudyDevice(ProtectiveDevice device, double voltageKv, double referralFactor,
-            ProtectiveDevice referred, List<Note> assumptions) {
+            ProtectiveDevice referred, List<Note> assumptions, DesignLimits limits) {
         /** Copies the list in. */
         public StudyDevice {
             assumptions = List.copyOf(assumptions);
@@ -135,6 +179,34 @@ public record Study(String name, String title, double voltageKv, double frequenc
 
     /** A check to run. */
     public sealed interface StudyCheck permits CableCheckSpec, GradingCheckSpec {
+    }
+
+    /**
+     * What design proposals for a relay's settings must respect beside its cable.
+     *
+     * @param loadAmps the full-load current in primary amperes, if stated
+     * @param noTrip currents the relay must ride through
+     * @param sensitivityFactor the lowest fault current over the pickup must reach at least this
+     * @param pickupStepAmps resolution of the first inverse-time stage's pickup, in its setting's amperes
+     */
+    public record DesignLimits(OptionalDouble loadAmps, List<NoTrip> noTrip, double sensitivityFactor,
+            double pickupStepAmps) {
+        /** Pickup over full-load current at least this: 1.25 (common practice). */
+        public static final double LOAD_FACTOR = 1.25;
+        /** Lowest fault current over pickup at least this: 1.5 (common practice). */
+        public static final double DEFAULT_SENSITIVITY_FACTOR = 1.5;
+        /** Pickup step of settings in primary amperes: 1 A (common practice). */
+        public static final double DEFAULT_PICKUP_STEP_A = 1.0;
+        /** Pickup step of settings in secondary amperes: 0.01 A (common practice, from memory). */
+        public static final double DEFAULT_SECONDARY_PICKUP_STEP_A = 0.01;
+        /** No limits: for devices other than relays. */
+        public static final DesignLimits NONE = new DesignLimits(OptionalDouble.empty(), List.of(),
+                DEFAULT_SENSITIVITY_FACTOR, DEFAULT_PICKUP_STEP_A);
+
+        /** Copies the list in. */
+        public DesignLimits {
+            noTrip = List.copyOf(noTrip);
+        }
     }
 
     /** Where a cable check's DC-offset heating comes from. */

@@ -26,6 +26,7 @@ import coordination.core.curve.SettingRange;
 import coordination.core.curve.TabulatedCurve;
 import coordination.core.curve.TimeCurrentCurve;
 import coordination.core.curve.TripUnitBreaker;
+import coordination.core.design.NoTrip;
 import coordination.core.internal.Checks;
 import coordination.core.margin.DcOffset;
 import coordination.core.margin.GradingRequirement;
@@ -99,6 +100,13 @@ public final class StudyReader {
     private static final NumberField TOL_TIME_MIN = number("time_min_s", "s").from(0).to(1).orElse(0);
     private static final NumberField TOL_PICKUP = number("pickup_percent", "%").from(0).to(50).required();
     private static final NumberField MULTIPLIER_LIMITS = number("", "").above(0).to(100);
+    private static final NumberField MULTIPLIER_STEP = number("", "").above(0).to(10);
+    private static final NumberField PICKUP_STEP = number("pickup_step_a", "A").above(0).to(1e4);
+    private static final NumberField LOAD = number("load_a", "A").above(0).to(1e6);
+    private static final NumberField SENSITIVITY = number("sensitivity_factor", "").from(1).to(10)
+            .orElse(Study.DesignLimits.DEFAULT_SENSITIVITY_FACTOR);
+    private static final NumberField NO_TRIP_CURRENT = number("current_a", "A").above(0).to(1e6).required();
+    private static final NumberField NO_TRIP_TIME = number("time_s", "s").above(0).to(1e4).required();
     private static final NumberField UPPER_MULTIPLE = number("upper_multiple", "").above(1).to(1000)
             .orElse(InverseTimeStage.STANDARD_UPPER_MULTIPLE);
     private static final NumberField CONSTANT_A = number("a_s", "s").above(0).to(1e4).required();
@@ -134,6 +142,8 @@ public final class StudyReader {
     private final Binder b;
     private final Set<String> declared = new HashSet<>();
     private OptionalDouble studyKv = OptionalDouble.empty();
+    /** The design limits of the relay just read; none for other devices. */
+    private Study.DesignLimits designLimits = Study.DesignLimits.NONE;
     private OptionalDouble frequency = OptionalDouble.empty();
 
     private StudyReader(String file) {
@@ -499,6 +509,7 @@ public final class StudyReader {
         Optional<ProtectiveDevice> device;
         String who = id.orElse(null);
         List<Note> notes = new ArrayList<>();
+        designLimits = Study.DesignLimits.NONE;
         try {
             device = switch (type.get()) {
                 case RELAY -> relay(m, path, who, notes);
@@ -516,11 +527,12 @@ public final class StudyReader {
         }
         double factor = studyKv.isEmpty() ? 1.0 : kv.getAsDouble() / studyKv.getAsDouble();
         return Optional.of(new Study.StudyDevice(device.get(), kv.getAsDouble(), factor,
-                device.get().referredBy(factor), notes));
+                device.get().referredBy(factor), notes, designLimits));
     }
 
     private Optional<ProtectiveDevice> relay(Node.MapNode m, String path, String id, List<Note> notes) {
-        b.allowOnly(m, path, "id", "type", "voltage_kv", "breaker_s", "ct", "stages", "tolerance");
+        b.allowOnly(m, path, "id", "type", "voltage_kv", "breaker_s", "ct", "stages", "tolerance", "load_a", "no_trip",
+                "sensitivity_factor");
         int before = b.problemCount();
         OptionalDouble breaker = b.number(m, path, BREAKER_TIME);
         Optional<CurrentTransformer> ct = Optional.empty();
@@ -584,7 +596,49 @@ public final class StudyReader {
                 break;
             }
         }
-        return Optional.of(new Relay(id, stages, ct, breaker.getAsDouble(), tolerance));
+        Relay relay = new Relay(id, stages, ct, breaker.getAsDouble(), tolerance);
+        Optional<Study.DesignLimits> limits = designLimits(m, path, stageNodes.get(), ct.isPresent());
+        if (limits.isEmpty()) {
+            return Optional.empty();
+        }
+        designLimits = limits.get();
+        return Optional.of(relay);
+    }
+
+    /** What a relay's settings must respect beside the cable: its load, starting currents, sensitivity, steps. */
+    private Optional<Study.DesignLimits> designLimits(Node.MapNode m, String path, List<Node> stageNodes,
+            boolean secondary) {
+        int before = b.problemCount();
+        OptionalDouble load = b.number(m, path, LOAD);
+        OptionalDouble sensitivity = b.number(m, path, SENSITIVITY);
+        List<NoTrip> noTrip = new ArrayList<>();
+        List<Node> points = b.optionalList(m, path, "no_trip");
+        for (int i = 0; i < points.size(); i++) {
+            Node item = points.get(i);
+            String p = path + ".no_trip[" + i + "]";
+            Optional<Node.MapNode> point = b.map(item, p);
+            if (point.isEmpty()) {
+                continue;
+            }
+            b.allowOnly(point.get(), p, "current_a", "time_s");
+            OptionalDouble amps = b.number(point.get(), p, NO_TRIP_CURRENT);
+            OptionalDouble seconds = b.number(point.get(), p, NO_TRIP_TIME);
+            if (amps.isPresent() && seconds.isPresent()) {
+                noTrip.add(new NoTrip(amps.getAsDouble(), seconds.getAsDouble()));
+            }
+        }
+        double step = secondary ? Study.DesignLimits.DEFAULT_SECONDARY_PICKUP_STEP_A
+                : Study.DesignLimits.DEFAULT_PICKUP_STEP_A;
+        for (int i = 0; i < stageNodes.size(); i++) {
+            if (stageNodes.get(i) instanceof Node.MapNode stage && b.has(stage, "pickup_step_a")) {
+                step = b.number(stage, path + ".stages[" + i + "]", PICKUP_STEP).orElse(step);
+                break;
+            }
+        }
+        if (b.problemCount() > before) {
+            return Optional.empty();
+        }
+        return Optional.of(new Study.DesignLimits(load, noTrip, sensitivity.getAsDouble(), step));
     }
 
     private Optional<RelayTolerance> relayTolerance(Node.MapNode m, String path) {
@@ -665,6 +719,8 @@ public final class StudyReader {
             }
         }
         allowed.add(kind.rangeKey());
+        allowed.add(kind.stepKey());
+        allowed.add("pickup_step_a");
         b.allowOnly(m, path, allowed);
         int before = b.problemCount();
         OptionalDouble multiplier = b.number(m, path, MULTIPLIER_LIMITS.required().named(kind.key()));
@@ -696,15 +752,21 @@ public final class StudyReader {
     /** The stated setting range of a multiplier, or the kind's default widened to the setting. */
     private Optional<SettingRange> settingRange(Node.MapNode m, String path, MultiplierKind kind,
             OptionalDouble multiplier) {
+        OptionalDouble step = b.number(m, path, MULTIPLIER_STEP.named(kind.stepKey())
+                .orElse(kind.defaultRange().step()));
+        if (step.isEmpty()) {
+            return Optional.empty();
+        }
         if (!b.has(m, kind.rangeKey())) {
-            return multiplier.isPresent() ? Optional.of(kind.defaultRange().including(multiplier.getAsDouble()))
-                    : Optional.empty();
+            SettingRange d = kind.defaultRange();
+            return multiplier.isPresent() ? Optional.of(new SettingRange(d.min(), d.max(), step.getAsDouble())
+                    .including(multiplier.getAsDouble())) : Optional.empty();
         }
         Optional<double[]> pair = pair(m, path, kind.rangeKey(), MULTIPLIER_LIMITS);
         if (pair.isEmpty()) {
             return Optional.empty();
         }
-        SettingRange r = new SettingRange(pair.get()[0], pair.get()[1]);
+        SettingRange r = new SettingRange(pair.get()[0], pair.get()[1], step.getAsDouble());
         if (multiplier.isPresent() && !r.contains(multiplier.getAsDouble())) {
             b.problem(b.value(m, kind.rangeKey()), Binder.join(path, kind.rangeKey()), "the " + kind.key() + " "
                     + Checks.format(multiplier.getAsDouble()) + " lies outside the stated range " + r

@@ -1,5 +1,6 @@
 package coordination.core.study;
 
+import coordination.core.Quantities;
 import coordination.core.margin.CableCheck;
 import coordination.core.margin.CheckResult;
 import coordination.core.margin.GradingCheck;
@@ -70,7 +71,23 @@ public record StudyReport(Study study, List<CheckResult> results, List<CheckNote
             }
             notes.add(StudyNotes.of(study, c, results.get(results.size() - 1)));
         }
-        return new StudyReport(study, results, notes, List.of());
+        return new StudyReport(study, results, notes, rideThrough(study));
+    }
+
+    /** A device that trips on a current the study says it must ride through does its job badly. */
+    private static List<Note> rideThrough(Study study) {
+        List<Note> out = new ArrayList<>();
+        for (Study.StudyDevice d : study.devices()) {
+            for (coordination.core.design.NoTrip p : d.limits().noTrip()) {
+                double t = d.device().minimumCurve().seconds(p.currentAmps());
+                if (t < p.seconds()) {
+                    out.add(new Note("no-trip-not-met", "'" + d.id() + "' can operate at "
+                            + Quantities.current(p.currentAmps(), 3) + " in " + Quantities.significant(t, 3)
+                            + " s, before the " + Quantities.significant(p.seconds(), 3) + " s it must ride through"));
+                }
+            }
+        }
+        return out;
     }
 
     /**

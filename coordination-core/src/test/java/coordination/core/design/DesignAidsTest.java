@@ -22,12 +22,15 @@ import coordination.core.margin.GradingRequirement;
 import coordination.core.margin.MarginRequirement;
 import java.util.ArrayList;
 import java.util.List;
+import java.util.Optional;
 import java.util.SplittableRandom;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.params.ParameterizedTest;
 import org.junit.jupiter.params.provider.ValueSource;
 
 class DesignAidsTest {
+    private static final GradingRequirement.Interval INTERVAL = (GradingRequirement.Interval) GradingRequirement
+            .intervalSeconds(0.3);
     /** The solvers bisect to 1e-10 relative; values are compared a little wider. */
     private static final double SOLVED = 1e-8;
     private static final CableThermalLimit CU_XLPE =
@@ -61,7 +64,7 @@ class DesignAidsTest {
         MinimumConductor.Result r = MinimumConductor.solve(relay, CU_XLPE, true, 1500, 12000,
                 MarginRequirement.seconds(0));
         assertThat(r.toString(), r.found(), is(false));
-        assertThat(r.reason(), is("'R' does not clear from 1500 A to 2000 A - no conductor size changes that"));
+        assertThat(r.reason(), is("'R' does not clear from 1.5 kA to 2 kA - no conductor size changes that"));
     }
 
     @Test
@@ -84,12 +87,16 @@ class DesignAidsTest {
         Relay down = Relay.of("D", InverseTimeStage.of(InverseTimeFamily.IEC_STANDARD_INVERSE, 300, 0.3));
         Relay up = Relay.of("U", InverseTimeStage.of(InverseTimeFamily.IEC_STANDARD_INVERSE, 300, 0.9));
         List<RadialGrading.Setting> s = RadialGrading.grade(List.of(
-                new RadialGrading.Link(down, 1, null, MarginRequirement.seconds(0), 1000, 6000, 0.05, 1.0),
-                new RadialGrading.Link(up, 1, null, MarginRequirement.seconds(0), 1000, 8000, 0.05, 1.0)), 0.3);
-        assertThat(s.get(0).multiplier(), is(0.05));
+                new RadialGrading.Link(down, 1, Optional.empty(), INTERVAL, 1000, 6000, List.of()),
+                new RadialGrading.Link(up, 1, Optional.empty(), INTERVAL, 1000, 6000, List.of())));
+        assertThat(s.get(0).proposed().getAsDouble(), is(0.05));
+        assertThat(s.get(0).binding(), is(RadialGrading.Binding.SMALLEST_SETTING));
         double expected = 0.05 + 0.3 * (Math.pow(6000 / 300.0, 0.02) - 1) / 0.14;
-        assertThat(s.get(1).multiplier(), closeTo(expected, expected * SOLVED));
-        assertThat(s.get(1).grading().toString(), s.get(1).grading().pass(), is(true));
+        assertThat(s.get(1).exact().getAsDouble(), closeTo(expected, expected * SOLVED));
+        // rounded up to the relay's 0.01 step, so that the interval still holds
+        assertThat(s.get(1).proposed().getAsDouble(), is(Math.ceil(expected * 100) / 100));
+        assertThat(s.get(1).binding(), is(RadialGrading.Binding.GRADING));
+        assertThat(s.get(1).gradings().get(0).toString(), s.get(1).gradings().get(0).pass(), is(true));
     }
 
     @Test
@@ -98,9 +105,10 @@ class DesignAidsTest {
         Relay down = Relay.of("D", InverseTimeStage.of(InverseTimeFamily.IEC_STANDARD_INVERSE, 300, 0.3));
         Relay up = Relay.of("U", InverseTimeStage.of(InverseTimeFamily.IEC_STANDARD_INVERSE, 300, 0.9));
         List<RadialGrading.Setting> s = RadialGrading.grade(List.of(
-                new RadialGrading.Link(down, 1, null, MarginRequirement.seconds(0), 1000, 6000, 0.05, 1.0),
-                new RadialGrading.Link(up, 1, small, MarginRequirement.seconds(0), 1000, 8000, 0.05, 1.0)), 0.3);
-        assertThat(s.get(1).problem(), containsString("no multiplier meets both"));
+                new RadialGrading.Link(down, 1, Optional.empty(), INTERVAL, 1000, 6000, List.of()),
+                new RadialGrading.Link(up, 1, Optional.of(new CableDuty(small, 1000, 8000, MarginRequirement.seconds(0),
+                        Optional.empty())), INTERVAL, 1000, 6000, List.of())));
+        assertThat(s.get(1).problem().orElseThrow(), containsString("no multiplier meets both"));
     }
 
     private static Relay randomRelay(SplittableRandom r) {
@@ -185,15 +193,15 @@ class DesignAidsTest {
                     ((InverseTimeStage) down.stages().get(0)).pickupAmps()) * 1.5;
             double hi = lo * 5;
             List<RadialGrading.Setting> s = RadialGrading.grade(List.of(
-                    new RadialGrading.Link(down, 1, null, MarginRequirement.seconds(0), lo, hi, 0.05, 1.0),
-                    new RadialGrading.Link(up, 1, null, MarginRequirement.seconds(0), lo, hi * 1.5, 0.05, 20)), 0.3);
-            double m = s.get(1).multiplier();
-            if (Double.isNaN(m) || m <= 0.05) {
+                    new RadialGrading.Link(down, 1, Optional.empty(), INTERVAL, lo, hi, List.of()),
+                    new RadialGrading.Link(up, 1, Optional.empty(), INTERVAL, lo, hi, List.of())));
+            if (s.get(1).binding() != RadialGrading.Binding.GRADING || s.get(1).exact().isEmpty()) {
                 continue;
             }
+            double m = s.get(1).exact().getAsDouble();
             InverseTimeStage us = (InverseTimeStage) up.stages().get(0);
             InverseTimeStage ds = (InverseTimeStage) down.stages().get(0);
-            Relay downAt = withStage(down, ds.withMultiplier(0.05));
+            Relay downAt = withStage(down, ds.withMultiplier(s.get(0).proposed().getAsDouble()));
             GradingRequirement req = GradingRequirement.intervalSeconds(0.3);
             GradingCheckResult at = GradingCheck.check(withStage(up, us.withMultiplier(m)), downAt, lo, hi, req);
             GradingCheckResult less = GradingCheck.check(withStage(up, us.withMultiplier(m * 0.99)), downAt, lo, hi, req);

@@ -79,7 +79,7 @@ class CableCheckTest {
         assertThat(r.toString(), r.pass(), is(false));
         assertThat(r.notClearedFromAmps(), is(1500.0));
         assertThat(r.notClearedToAmps(), is(2000.0));
-        assertEquals("'R' does not clear from 1500 A to 2000 A", r.reason());
+        assertEquals("'R' does not clear from 1.5 kA to 2 kA", r.reason());
         // crossing up at the pickup step, and down again where (kS/I)^2 = 0.2 s
         assertThat(r.crossingsAmps().length, is(2));
         assertThat(r.crossingsAmps()[0], is(2000.0));

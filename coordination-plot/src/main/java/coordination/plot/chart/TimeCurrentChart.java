@@ -6,7 +6,7 @@ import coordination.core.curve.TimeCurrentCurve;
 import coordination.core.margin.CableCheckResult;
 import coordination.core.margin.GradingCheckResult;
 import coordination.core.margin.Side;
-import coordination.plot.Quantities;
+import coordination.core.Quantities;
 import java.awt.BasicStroke;
 import java.awt.Color;
 import java.awt.Font;

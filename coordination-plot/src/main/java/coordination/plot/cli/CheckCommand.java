@@ -5,14 +5,23 @@ import coordination.core.margin.CheckResult;
 import coordination.core.margin.GradingCheckResult;
 import coordination.core.study.Problem;
 import coordination.core.study.ReportWriter;
+import coordination.core.study.Sensitivity;
 import coordination.core.study.StudyReport;
-import coordination.plot.Quantities;
+import coordination.core.Quantities;
 import java.io.PrintStream;
 import java.nio.file.Path;
 import java.util.ArrayList;
+import java.util.LinkedHashSet;
 import java.util.List;
+import java.util.Set;
+import java.util.Stack;
+import java.util.regex.Pattern;
 import java.util.concurrent.Callable;
 import picocli.CommandLine.Command;
+import picocli.CommandLine.IParameterConsumer;
+import picocli.CommandLine.Model.ArgSpec;
+import picocli.CommandLine.Model.CommandSpec;
+import picocli.CommandLine.ParameterException;
 import picocli.CommandLine.Option;
 import picocli.CommandLine.Parameters;
 
@@ -21,6 +30,9 @@ import picocli.CommandLine.Parameters;
         description = "Runs every check of the study files and prints a table, or the JSON report."
                 + " Exit 0 when all pass, 1 when any check fails, 2 on input errors.")
 final class CheckCommand implements Callable<Integer> {
+    /** Significant figures of computed values in the table: the inputs are uncertain by 10 % or more. */
+    private static final int FIGURES = 3;
+
     private final PrintStream out;
     private final PrintStream err;
 
@@ -29,6 +41,40 @@ final class CheckCommand implements Callable<Integer> {
 
     @Option(names = "--json", description = "print the JSON report (one study) or a list of reports")
     boolean json;
+
+    @Option(names = "--sensitivity", arity = "0..1", paramLabel = "MIN,MAX",
+            parameterConsumer = FactorsConsumer.class,
+            description = "run every check again with each range's lowest current times MIN and its highest times"
+                    + " MAX (default 0.9,1.1, or --sensitivity=MIN,MAX) and report the verdicts that flip; the exit"
+                    + " code stays that of the study as given")
+    Factors sensitivity;
+
+    /** The two factors of {@code --sensitivity}. */
+    record Factors(double min, double max) {
+    }
+
+    /**
+     * Takes the next argument as {@code MIN,MAX} only if it is two numbers; anything else (a study
+     * file) stays for the positional parameters and the default factors apply.
+     */
+    static final class FactorsConsumer implements IParameterConsumer {
+        @Override
+        public void consumeParameters(Stack<String> args, ArgSpec argSpec, CommandSpec commandSpec) {
+            Factors f = new Factors(Sensitivity.DEFAULT_MIN_FACTOR, Sensitivity.DEFAULT_MAX_FACTOR);
+            if (!args.isEmpty() && TWO_NUMBERS.matcher(args.peek()).matches()) {
+                String value = args.pop();
+                double[] given = factors(value);
+                if (given == null) {
+                    throw new ParameterException(commandSpec.commandLine(), "Invalid value for option"
+                            + " '--sensitivity': '" + value + "': give MIN,MAX with 0 < MIN <= 1 <= MAX, e.g. 0.9,1.1");
+                }
+                f = new Factors(given[0], given[1]);
+            }
+            argSpec.setValue(f);
+        }
+    }
+
+    private static final Pattern TWO_NUMBERS = Pattern.compile("\\s*[-+0-9.eE]+\\s*,\\s*[-+0-9.eE]+\\s*");
 
     CheckCommand(PrintStream out, PrintStream err) {
         this.out = out;
@@ -48,6 +94,7 @@ final class CheckCommand implements Callable<Integer> {
         boolean invalid = false;
         boolean failed = false;
         List<StudyReport> reports = new ArrayList<>();
+        List<Sensitivity> runs = new ArrayList<>();
         for (Path f : files) {
             StudyInputs.Loaded l = StudyInputs.load(f);
             if (l.study() == null) {
@@ -57,19 +104,27 @@ final class CheckCommand implements Callable<Integer> {
                 invalid = true;
                 continue;
             }
-            StudyReport r = StudyReport.evaluate(l.study());
+            Sensitivity run = sensitivity == null ? null : Sensitivity.of(l.study(), sensitivity.min(), sensitivity.max());
+            StudyReport r = run == null ? StudyReport.evaluate(l.study()) : run.nominal();
             failed |= !r.pass();
             reports.add(r);
+            if (run != null) {
+                runs.add(run);
+            }
         }
         if (json) {
             if (files.size() == 1 && reports.size() == 1) {
-                out.print(ReportWriter.write(reports.get(0)));
+                out.print(runs.isEmpty() ? ReportWriter.write(reports.get(0)) : ReportWriter.write(runs.get(0)));
             } else if (!reports.isEmpty() || !invalid) {
-                out.print(ReportWriter.write(reports, !failed && !invalid));
+                out.print(runs.isEmpty() ? ReportWriter.write(reports, !failed && !invalid)
+                        : ReportWriter.writeSensitivities(runs, !failed && !invalid));
             }
         } else {
-            for (StudyReport r : reports) {
-                table(r);
+            for (int i = 0; i < reports.size(); i++) {
+                table(reports.get(i));
+                if (!runs.isEmpty()) {
+                    flips(runs.get(i));
+                }
             }
         }
         return invalid ? ExitCodes.BAD_INPUT : failed ? ExitCodes.CHECK_FAILED : ExitCodes.PASS;
@@ -78,15 +133,12 @@ final class CheckCommand implements Callable<Integer> {
     private void table(StudyReport r) {
         out.println(r.study().name() + ": " + r.study().title() + " - " + (r.pass() ? "PASS" : "FAIL"));
         for (CheckResult o : r.results()) {
-            String verdict = "  " + (o.pass() ? "pass" : "FAIL");
-            if (o instanceof CableCheckResult c) {
-                out.println(verdict + "  cable    " + c.device() + " protects " + c.cable() + ": " + c.reason()
-                        + crossings(c.crossingsAmps()));
-            } else if (o instanceof GradingCheckResult g) {
-                out.println(verdict + "  grading  " + g.downstream() + " under " + g.upstream() + ": " + g.reason()
-                        + crossings(g.crossingsAmps()));
-            }
+            double[] crossings = o instanceof CableCheckResult c ? c.crossingsAmps()
+                    : ((GradingCheckResult) o).crossingsAmps();
+            out.println("  " + (o.pass() ? "pass" : "FAIL") + "  " + describe(o) + ": " + o.reason()
+                    + crossings(crossings));
         }
+        notes(r);
     }
 
     private static String crossings(double[] amps) {
@@ -95,8 +147,58 @@ final class CheckCommand implements Callable<Integer> {
         }
         List<String> s = new ArrayList<>();
         for (double a : amps) {
-            s.add(Quantities.significant(a, 6));
+            s.add(Quantities.current(a, FIGURES));
         }
-        return "; crossings at " + String.join(", ", s) + " A";
+        return "; crossings at " + String.join(", ", s);
+    }
+
+    private void notes(StudyReport r) {
+        Set<String> seen = new LinkedHashSet<>();
+        for (StudyReport.CheckNotes n : r.notes()) {
+            n.assumptions().forEach(a -> seen.add("  assumed  " + a.message()));
+        }
+        for (StudyReport.CheckNotes n : r.notes()) {
+            n.warnings().forEach(w -> seen.add("  warning  " + w.message()));
+        }
+        r.warnings().forEach(w -> seen.add("  warning  " + w.message()));
+        seen.forEach(out::println);
+    }
+
+    private void flips(Sensitivity run) {
+        List<Integer> flips = run.flips();
+        String head = "  sensitivity, lowest currents x " + Quantities.asGiven(run.minFactor()) + " and highest x "
+                + Quantities.asGiven(run.maxFactor()) + ": ";
+        if (flips.isEmpty()) {
+            out.println(head + "no verdict flips");
+            return;
+        }
+        out.println(head + flips.size() + (flips.size() == 1 ? " verdict flips" : " verdicts flip"));
+        for (int i : flips) {
+            CheckResult w = run.widened().results().get(i);
+            out.println("    " + (w.pass() ? "FAIL -> pass  " : "pass -> FAIL  ") + describe(w) + ": " + w.reason());
+        }
+    }
+
+    private static String describe(CheckResult o) {
+        if (o instanceof CableCheckResult c) {
+            return "cable    " + c.device() + " protects " + c.cable();
+        }
+        GradingCheckResult g = (GradingCheckResult) o;
+        return "grading  " + g.downstream() + " under " + g.upstream();
+    }
+
+    /** The two factors of {@code MIN,MAX}, or null if they are not numbers with 0 < MIN <= 1 <= MAX. */
+    static double[] factors(String text) {
+        String[] parts = text.split(",", -1);
+        if (parts.length != 2) {
+            return null;
+        }
+        try {
+            double lo = Double.parseDouble(parts[0].strip());
+            double hi = Double.parseDouble(parts[1].strip());
+            return lo > 0 && lo <= 1 && hi >= 1 && Double.isFinite(hi) ? new double[] {lo, hi} : null;
+        } catch (NumberFormatException e) {
+            return null;
+        }
     }
 }

@@ -2,15 +2,15 @@ package coordination.plot.cli;
 
 import coordination.core.design.MinimumConductor;
 import coordination.core.design.RadialGrading;
-import coordination.core.design.SlowestSetting;
+import coordination.core.margin.GradingCheckResult;
+import coordination.core.margin.MarginRequirement;
 import coordination.core.study.Problem;
 import coordination.core.study.ReportWriter;
 import coordination.core.study.StudyDesign;
-import coordination.plot.Quantities;
+import coordination.core.Quantities;
 import java.io.PrintStream;
 import java.nio.file.Path;
 import java.util.List;
-import java.util.Locale;
 import java.util.concurrent.Callable;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Option;
@@ -22,8 +22,8 @@ import picocli.CommandLine.Parameters;
                 + " largest time multiplier and pickup of the inverse-time stage that still protect the cable."
                 + " For relays graded with interval_s: the smallest multipliers that grade, from the load end up.")
 final class DesignCommand implements Callable<Integer> {
-    /** Significant figures of the proposals in the text output. */
-    private static final int FIGURES = 4;
+    /** Significant figures of computed values in the text output: the inputs are uncertain by 10 % or more. */
+    private static final int FIGURES = 3;
 
     private final PrintStream out;
     private final PrintStream err;
@@ -68,35 +68,83 @@ final class DesignCommand implements Callable<Integer> {
         out.println("design " + design.study().name() + ": " + design.study().title());
         for (StudyDesign.CableAid a : design.cableAids()) {
             out.println("  " + a.check().device() + " protecting " + a.check().cable() + " from "
-                    + Quantities.kiloamps(a.check().range().fromAmps(), 3) + " to "
-                    + Quantities.kiloamps(a.check().range().toAmps(), 3) + " kA with " + a.check().requirement() + ":");
+                    + Quantities.current(a.check().range().fromAmps(), FIGURES) + " to "
+                    + Quantities.current(a.check().range().toAmps(), FIGURES) + " with " + a.check().requirement()
+                    + ":");
             MinimumConductor.Result s = a.conductor();
             int parallel = a.cable().limit().parallel();
-            out.println("    conductor  now " + a.cable().sizeText() + (parallel > 1 ? " x " + parallel : "")
-                    + ", smallest " + (!s.found() ? "none: " + s.reason()
-                    : num(s.sizeMm2()) + " mm² -> " + (Double.isNaN(s.iecSizeMm2()) ? "above 2500 mm²"
-                    : num(s.iecSizeMm2()) + " mm²") + (s.awgOrKcmil() == null ? "" : " or " + s.awgOrKcmil())));
+            String per = parallel > 1 ? " per conductor (" + parallel + " in parallel)" : "";
+            out.println("    conductor: now " + a.cable().sizeText() + per + ", smallest " + (!s.found()
+                    ? "none: " + s.reason() : num(s.sizeMm2()) + " mm²" + per + bindsAt(s) + " -> " + (Double.isNaN(s.iecSizeMm2())
+                    ? "above 2500 mm²" : Quantities.asGiven(s.iecSizeMm2()) + " mm²")
+                    + (s.awgOrKcmil() == null ? "" : " or " + s.awgOrKcmil())));
             a.stage().ifPresent(stage -> {
-                setting(stage.stage().multiplierKind().key(), stage.multiplier(), stage.multiplierAtRelayLimit());
-                setting("pickup_a", stage.pickup(), false);
+                multiplier(stage.multiplier());
+                pickup(stage.pickup());
             });
         }
         for (StudyDesign.GradingChain c : design.chains()) {
-            out.println("  grading chain with " + num(c.intervalSeconds()) + " s, from the load end:");
-            for (RadialGrading.Setting m : c.relays()) {
-                double interval = m.grading() == null ? Double.NaN : m.grading().minIntervalSeconds();
-                out.println("    " + m.id() + " multiplier now " + num(m.currentMultiplier()) + ", proposed "
-                        + (Double.isNaN(m.multiplier()) ? "none" : num(m.multiplier()))
-                        + (Double.isFinite(interval) ? " (interval " + num(interval) + " s)" : "")
-                        + (m.problem() == null ? "" : " - " + m.problem()));
+            out.println("  grading by time, from the load end:");
+            for (int i = 0; i < c.relays().size(); i++) {
+                RadialGrading.Setting m = c.relays().get(i);
+                StringBuilder line = new StringBuilder("    " + m.id() + ": " + m.kind().key().replace('_', ' ')
+                        + " now " + Quantities.asGiven(m.currentMultiplier()) + ", proposed ");
+                if (m.proposed().isPresent()) {
+                    line.append(Quantities.asGiven(m.proposed().getAsDouble())).append(" (").append(m.binding().words());
+                    m.bindingDevice().ifPresent(d -> line.append(" '").append(d).append("'"));
+                    if (m.exact().isPresent() && m.binding() != RadialGrading.Binding.SMALLEST_SETTING) {
+                        line.append("; exactly ").append(num(m.exact().getAsDouble()));
+                    }
+                    line.append(")");
+                    for (GradingCheckResult g : m.gradings()) {
+                        line.append(g.upstream().equals(m.id()) ? "; over '" + g.downstream() + "'" : "; under '"
+                                + g.upstream() + "'").append(" ").append(g.pass() ? "meets " : "fails ")
+                                .append(g.requirement()).append(" (").append(num(g.minIntervalSeconds())).append(" s)");
+                    }
+                } else {
+                    line.append("none");
+                }
+                m.problem().ifPresent(p -> line.append(" - ").append(p));
+                out.println(line);
             }
         }
     }
 
-    private void setting(String key, SlowestSetting.Result r, boolean atLimit) {
-        out.println("    " + String.format(Locale.ROOT, "%-10s", key) + " now " + num(r.current()) + ", largest "
-                + (!r.found() ? "none: " + r.reason() : num(r.largest())
-                + (atLimit ? " (the relay's largest setting)" : "")));
+    private void multiplier(StudyDesign.MultiplierAid m) {
+        String key = m.kind().key().replace('_', ' ');
+        out.println("    " + key + ": now " + Quantities.asGiven(m.now()) + ", largest " + (m.proposed().isPresent()
+                ? Quantities.asGiven(m.proposed().getAsDouble()) + " (" + m.binding().words() + "; settings "
+                + m.range() + ")" : "none") + m.problem().map(p -> " - " + p).orElse(""));
+    }
+
+    private void pickup(StudyDesign.PickupAid p) {
+        String unit = p.secondary() ? " A secondary" : " A";
+        String primary = p.secondary() ? " (" + num(p.now() * p.ctRatio()) + " A primary)" : "";
+        StringBuilder line = new StringBuilder("    pickup: now " + Quantities.asGiven(p.now()) + unit + primary
+                + ", largest ");
+        if (p.proposed().isPresent()) {
+            double v = p.proposed().getAsDouble();
+            line.append(Quantities.asGiven(v)).append(unit);
+            if (p.secondary()) {
+                line.append(" (").append(num(v * p.ctRatio())).append(" A primary)");
+            }
+            line.append(" (").append(p.binding().words()).append(")");
+            p.lowestForLoad().ifPresent(l -> line.append(", at least ").append(num(l)).append(unit).append(" for the load"));
+        } else {
+            line.append("none");
+        }
+        p.problem().ifPresent(x -> line.append(" - ").append(x));
+        out.println(line);
+    }
+
+    /** Where the smallest conductor's margin is least: the current that decides its size. */
+    private static String bindsAt(MinimumConductor.Result s) {
+        if (s.check() == null) {
+            return "";
+        }
+        double at = s.check().requirement() instanceof MarginRequirement.Ratio ? s.check().minRatioAtAmps()
+                : s.check().minMarginAtAmps();
+        return Double.isFinite(at) ? " (the cable's margin at " + Quantities.current(at, FIGURES) + ")" : "";
     }
 
     private static String num(double v) {

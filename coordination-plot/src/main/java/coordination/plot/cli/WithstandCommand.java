@@ -8,7 +8,7 @@ import coordination.core.cable.Insulation;
 import coordination.core.cable.ThermalMethod;
 import coordination.core.cable.WithstandTable;
 import coordination.core.study.ReportWriter;
-import coordination.plot.Quantities;
+import coordination.core.Quantities;
 import java.io.PrintStream;
 import java.util.ArrayList;
 import java.util.List;

@@ -6,7 +6,7 @@ import coordination.core.margin.CheckResult;
 import coordination.core.margin.GradingCheckResult;
 import coordination.core.study.Study;
 import coordination.core.study.StudyReport;
-import coordination.plot.Quantities;
+import coordination.core.Quantities;
 import coordination.plot.chart.ChartContent;
 import coordination.plot.chart.Palette;
 import coordination.plot.chart.TimeCurrentChart;
@@ -33,6 +33,10 @@ public final class CoordinationSheet {
     public static final String CAUTION = "Caution: these results support engineering judgement and do not replace"
             + " it. Check them against the local codes that apply and have the study reviewed by a qualified,"
             + " licensed engineer before relying on it.";
+
+    /** What the checks leave out, printed before the caution. */
+    public static final String SCOPE = "Scope: each check covers its stated fault-current range only; overload"
+            + " protection of the cables (currents below the ranges) is not part of these checks.";
 
     private static final double MM_TO_PT = 72.0 / 25.4;
     private static final double MARGIN = 22;
@@ -90,7 +94,7 @@ public final class CoordinationSheet {
         g.setStroke(new BasicStroke(0.8f));
         g.draw(new Rectangle2D.Double(MARGIN / 2, MARGIN / 2, width - MARGIN, height - MARGIN));
         double top = titleBlock(g);
-        double footerTop = height - MARGIN - 22;
+        double footerTop = height - MARGIN - 30;
         double chartW = Math.round((width - 2 * MARGIN) * 0.58);
         double resultsH = Math.min(130, 28 + 11 * Math.max(1, report.results().size()));
         double chartBottom = footerTop - resultsH - 6;
@@ -216,9 +220,10 @@ public final class CoordinationSheet {
                 l.id(),
                 l.material().key() + ", " + l.insulation().key() + ", " + (l.parallel() > 1 ? l.parallel() + " x " : "")
                     + c.sizeText() + ", " + l.method().key(),
-                "k " + String.format(java.util.Locale.ROOT, "%.1f", l.k()) + ", "
-                    + Quantities.significant(l.initialCelsius(), 1) + " °C to "
-                    + Quantities.asGiven(l.finalCelsius()) + " °C, I²t " + engineering(l.i2tA2s()) + "A²s",
+                "k " + Quantities.significant(l.k(), 3) + ", " + initial(c) + " to "
+                    + Quantities.asGiven(l.finalCelsius()) + " °C" + (c.finalSource()
+                    == Study.TemperatureSource.INSULATION_DEFAULT ? " (default)" : "") + ", I²t "
+                    + engineering(l.i2tA2s()) + "A²s",
                 "withstand " + kiloamps(l.withstandAmps(0.1)) + " / " + kiloamps(l.withstandAmps(1.0)) + " / "
                     + kiloamps(l.withstandAmps(5.0)) + " kA at 0.1 / 1 / 5 s",
                 c.fault().map(f -> "fault range " + kiloamps(f.fromAmps()) + " to " + kiloamps(f.toAmps()) + " kA")
@@ -244,6 +249,16 @@ public final class CoordinationSheet {
         if (shown < study.cables().size()) {
             text(g, "+ " + (study.cables().size() - shown) + " more in the report", x + 8, cy + 7.5);
         }
+    }
+
+    /** The initial temperature as the study gives it, or computed from the load to three figures. */
+    static String initial(Study.StudyCable c) {
+        double t = c.limit().initialCelsius();
+        return switch (c.initialSource()) {
+            case STATED -> Quantities.asGiven(t) + " °C";
+            case FROM_LOAD -> Quantities.significant(t, 3) + " °C (from the load)";
+            case INSULATION_DEFAULT -> Quantities.asGiven(t) + " °C (default)";
+        };
     }
 
     private void resultsTable(Graphics2D g, double x, double y, double w, double bottom) {
@@ -307,7 +322,8 @@ public final class CoordinationSheet {
         g.draw(new Line2D.Double(MARGIN, y, width - MARGIN, y));
         g.setFont(Palette.font(Font.PLAIN, 6.8f));
         g.setColor(Color.BLACK);
-        List<String> lines = wrap(g, CAUTION, width - 2 * MARGIN);
+        List<String> lines = new ArrayList<>(wrap(g, SCOPE, width - 2 * MARGIN));
+        lines.addAll(wrap(g, CAUTION, width - 2 * MARGIN));
         double ly = y + 8;
         for (String l : lines) {
             text(g, l, MARGIN, ly);

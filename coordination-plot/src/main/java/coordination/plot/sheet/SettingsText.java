@@ -11,7 +11,7 @@ import coordination.core.curve.Relay;
 import coordination.core.curve.TimeCurrentCurve;
 import coordination.core.curve.TripUnitBreaker;
 import coordination.core.study.Study;
-import coordination.plot.Quantities;
+import coordination.core.Quantities;
 import java.util.ArrayList;
 import java.util.List;
 
@@ -54,7 +54,7 @@ final class SettingsText {
             mcb.letThrough().ifPresent(e -> lines.add("let-through " + energy(e)));
         }
         if (d.referralFactor() != 1.0) {
-            lines.add("at " + g(d.voltageKv()) + " kV: currents x" + Quantities.significant(d.referralFactor(), 6)
+            lines.add("at " + g(d.voltageKv()) + " kV: currents x" + Quantities.significant(d.referralFactor(), 3)
                     + " on the chart");
         }
         return lines;

@@ -126,7 +126,7 @@ class HostileCliTest {
         Files.writeString(s, Files.readString(SAMPLES.resolve("05-blower-feeder-undersized.yaml"))
                 .replace("fault_ka: {min: 1.0, max: 10}", "fault_ka: {min: 0.001, max: 10}"));
         InProcess.Run r = InProcess.run("design", s.toString());
-        assertThat(r.out(), containsString("from 0.001 to 10 kA"));
+        assertThat(r.out(), containsString("from 1 A to 10 kA"));
     }
 
     @Test

@@ -1,10 +1,14 @@
 package coordination.plot.sheet;
 
 import static org.hamcrest.MatcherAssert.assertThat;
+import static org.hamcrest.Matchers.closeTo;
 import static org.hamcrest.Matchers.containsString;
 import static org.hamcrest.Matchers.greaterThan;
 import static org.hamcrest.Matchers.is;
 
+import coordination.core.Quantities;
+import coordination.core.curve.InverseTimeStage;
+import coordination.core.curve.Relay;
 import coordination.core.study.Study;
 import coordination.core.study.StudyReader;
 import coordination.core.study.StudyReport;
@@ -51,6 +55,52 @@ class SheetRenderTest {
         assertThat(text, containsString("these results support engineering judgement and do not replace"));
         assertThat(text, containsString("Devices and settings"));
         assertThat(text, containsString("Checks"));
+    }
+
+    private static String svgText(Study s) throws Exception {
+        byte[] svg = new CoordinationSheet(s, StudyReport.evaluate(s)).render(OutputFormat.SVG, 150);
+        DocumentBuilderFactory f = DocumentBuilderFactory.newInstance();
+        f.setFeature("http://apache.org/xml/features/nonvalidating/load-external-dtd", false);
+        return f.newDocumentBuilder().parse(new ByteArrayInputStream(svg)).getDocumentElement().getTextContent();
+    }
+
+    /**
+     * Inputs appear on the sheet as the study gives them, computed values to three figures: the
+     * second wrong answer of issue 12 printed 42.66 °C as "40 °C" and 150 °C as "200 °C".
+     */
+    @ParameterizedTest
+    @MethodSource("samples")
+    void theSheetShowsEveryInputAsGiven(Path file) throws Exception {
+        Study s = StudyReader.read(file);
+        String text = svgText(s);
+        for (Study.StudyCable c : s.cables()) {
+            assertThat(text, containsString(c.sizeText()));
+            assertThat(text, containsString(CoordinationSheet.initial(c) + " to "
+                    + Quantities.asGiven(c.limit().finalCelsius()) + " °C"));
+        }
+        for (Study.StudyDevice d : s.devices()) {
+            if (d.device() instanceof Relay r) {
+                for (var stage : r.stages()) {
+                    if (stage instanceof InverseTimeStage inv) {
+                        assertThat(text, containsString("pickup " + Quantities.asGiven(inv.pickupAmps()) + " A, "
+                                + inv.multiplierKind().key().replace('_', ' ') + " " + Quantities.asGiven(inv.multiplier())));
+                    }
+                }
+            }
+        }
+        assertThat(text, containsString(CoordinationSheet.SCOPE));
+    }
+
+    @org.junit.jupiter.api.Test
+    void temperaturesAreNotRoundedToOneFigure() throws Exception {
+        Study s = StudyReader.read(Path.of("../samples/03-dosing-room-mcbs.yaml"));
+        // common practice: from the load, 30 + (70 - 30) x (18 / 32)^2 = 42.66 °C for the D2 cable
+        assertThat(s.cable("D2-cable").limit().initialCelsius(), closeTo(42.656, 1e-3));
+        assertThat(svgText(s), containsString("42.7 °C (from the load) to 160 °C (default)"));
+        String stated = Files.readString(Path.of("../samples/02-filter-house-fuse.yaml")).replace("size_mm2: 120",
+                "size_mm2: 120\n    initial_c: 84.9\n    final_c: 150");
+        String text = svgText(StudyReader.parse("f.yaml", "f", stated));
+        assertThat(text, containsString("84.9 °C to 150 °C"));
     }
 
     @ParameterizedTest

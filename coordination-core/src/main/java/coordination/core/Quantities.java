@@ -1,4 +1,4 @@
-package coordination.plot;
+package coordination.core;
 
 import java.math.BigDecimal;
 import java.math.MathContext;
@@ -6,9 +6,9 @@ import java.math.RoundingMode;
 import java.util.Locale;
 
 /**
- * How the plot module writes quantities for people: inputs as the study gave them, computed values
+ * How quantities are written for people: inputs as the study gave them, computed values
  * to a stated number of significant figures, currents in A or kA. JSON keeps full precision and is
- * written by the core's report writer, not here.
+ * written by the report writer, not here.
  */
 public final class Quantities {
     private Quantities() {
