@@ -72,6 +72,19 @@ class SchemaTest {
         assertThat(file + ": " + errors, errors, empty());
     }
 
+    /** A report with its sensitivity run, one of whose verdicts flips, fits the report schema. */
+    @Test
+    void reportSchemaAcceptsASensitivityRun() throws Exception {
+        String yaml = Files.readString(Path.of("05-blower-feeder-undersized.yaml"))
+                .replace("margin_s: 0.1}", "margin_s: 0}").replace("max: 10}", "max: 4}");
+        coordination.core.study.Sensitivity run = coordination.core.study.Sensitivity.of(
+                coordination.core.study.StudyReader.parse("flip.yaml", "flip", yaml), 0.9, 1.1);
+        assertThat(run.flips(), is(java.util.List.of(0)));
+        Set<ValidationMessage> errors = schema("report.schema.json").validate(new ObjectMapper().readTree(
+                coordination.core.study.ReportWriter.write(run)));
+        assertThat(errors.toString(), errors, empty());
+    }
+
     /**
      * Invalid cases of the corpus that the study schema accepts, each with the reason no JSON
      * Schema can refuse it: the rule is about YAML itself, relates two values, or needs a model.

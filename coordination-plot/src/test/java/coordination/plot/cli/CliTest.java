@@ -56,7 +56,7 @@ class CliTest {
         Path out = tmp.resolve("out");
         InProcess.Run r = run("sheet", bad.toString(), "-o", out.toString());
         assertThat(r.code(), is(ExitCodes.BAD_INPUT));
-        assertEquals(bad + ":23:45: devices[0].stages[0].pickup_a: expected a number, found 'lots'\n", r.err());
+        assertEquals(bad + ":26:45: devices[0].stages[0].pickup_a: expected a number, found 'lots'\n", r.err());
         assertThat(Files.exists(out) ? files(out).size() : 0, is(0));
     }
 
@@ -187,10 +187,18 @@ class CliTest {
     void designProposesSizesSettingsAndGrading() {
         InProcess.Run r = run("design", SAMPLES.resolve("01-main-switchboard-incomer.yaml").toString());
         assertThat(r.code(), is(ExitCodes.PASS));
-        assertThat(r.out(), containsString("conductor  now 95 mm², smallest 54.84 mm² -> 70 mm² or 2/0 AWG"));
-        assertThat(r.out(), containsString("TX1-HV-relay multiplier now 0.25, proposed 0.09453 (interval 0.3 s)"));
+        assertThat(r.out(), containsString("conductor: now 95 mm², smallest 56.3 mm² (the cable's margin at 18 kA)"
+                + " -> 70 mm² or 2/0 AWG"));
+        assertThat(r.out(), containsString("pickup: now 320 A, largest 1333 A (sensitivity to the lowest fault), at"
+                + " least 200 A for the load"));
+        // the pump start binds the feeder relay, the incomer breaker below binds the transformer relay
+        assertThat(r.out(), containsString("P1-relay: tms now 0.8, proposed 0.75 (a current it must ride through;"
+                + " exactly 0.746)"));
+        assertThat(r.out(), containsString("TX1-HV-relay: tms now 0.75, proposed 0.69 (the interval over the device"
+                + " below 'Q0-incomer'; exactly 0.686); over 'P1-relay' meets 0.3 s"));
         InProcess.Run j = run("design", "--json", SAMPLES.resolve("05-blower-feeder-undersized.yaml").toString());
-        // the held very-inverse time beyond 20 x pickup needs 42 mm2, so the next IEC 60228 size, 50 mm2
+        // the held very-inverse time beyond 20 x pickup, with DC-offset heating, needs 44.6 mm2: the next
+        // IEC 60228 size is 50 mm2
         assertThat(j.out(), containsString("\"next_iec_mm2\" : 50.0"));
     }
 
@@ -212,11 +220,31 @@ class CliTest {
         InProcess.Run n = run("design", "--json", named.toString());
         InProcess.Run c = run("design", "--json", custom.toString());
         assertThat(n.code(), is(ExitCodes.PASS));
-        assertThat(c.out(), containsString("\"time_dial\" : {"));
+        assertThat(c.out(), containsString("\"kind\" : \"time_dial\""));
         assertEquals(n.out().replace("\"named\"", "\"study\"").replace("ieee-very-inverse", "curve"),
                 c.out().replace("\"stage\" : \"custom\"", "\"stage\" : \"curve\"").replace("\"custom\"", "\"study\""));
         InProcess.Run text = run("design", custom.toString());
-        assertThat(text.out(), containsString("time_dial  now 5, largest"));
+        assertThat(text.out(), containsString("time dial: now 5, largest"));
+    }
+
+    @Test
+    void sensitivityReportsTheVerdictsThatFlip(@TempDir Path tmp) throws Exception {
+        // passes at margin 0 up to 4 kA; the curves cross at 4.13 kA, inside 4 kA x 1.1
+        Path s = tmp.resolve("flip.yaml");
+        Files.writeString(s, Files.readString(SAMPLES.resolve("05-blower-feeder-undersized.yaml"))
+                .replace("margin_s: 0.1}", "margin_s: 0}").replace("fault_ka: {min: 1.0, max: 10}",
+                        "fault_ka: {min: 1.0, max: 4}"));
+        InProcess.Run r = run("check", "--sensitivity", s.toString());
+        assertThat(r.err(), r.code(), is(ExitCodes.PASS));
+        assertThat(r.out(), containsString("sensitivity, lowest currents x 0.9 and highest x 1.1: 1 verdict flips\n"
+                + "    pass -> FAIL  cable    B5-relay protects B5-cable: fails 0 s: minimum margin -0.0373 s at"
+                + " 4.4 kA"));
+        InProcess.Run narrow = run("check", "--sensitivity=1,1.02", s.toString());
+        assertThat(narrow.out(), containsString("sensitivity, lowest currents x 1 and highest x 1.02: no verdict"
+                + " flips"));
+        InProcess.Run bad = run("check", "--sensitivity=1.2,1.1", s.toString());
+        assertThat(bad.code(), is(ExitCodes.BAD_INPUT));
+        assertThat(bad.err(), containsString("give MIN,MAX with 0 < MIN <= 1 <= MAX"));
     }
 
     @Test
