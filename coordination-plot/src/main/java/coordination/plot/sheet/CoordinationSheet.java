@@ -79,7 +79,9 @@ public final class CoordinationSheet {
      * @throws IOException if encoding fails
      */
     public byte[] render(OutputFormat format, int dpi) throws IOException {
-        return Drawing.render(format, width, height, dpi, this::paint);
+        return Drawing.render(format, width, height, dpi, this::paint, new Drawing.Info(study.title(),
+                "Coordination sheet of study " + study.name() + (study.revision().isEmpty() ? ""
+                : ", revision " + study.revision()), studyDate()));
     }
 
     /**
@@ -106,6 +108,16 @@ public final class CoordinationSheet {
         cablesTable(g, rightX, y + 6, rightW, chartBottom);
         resultsTable(g, MARGIN, chartBottom + 4, width - 2 * MARGIN, footerTop - 4);
         footer(g, footerTop);
+    }
+
+    /** The study's date, if it is an ISO date (the study keeps the text as written). */
+    private java.util.Optional<java.time.LocalDate> studyDate() {
+        try {
+            return study.date().isEmpty() ? java.util.Optional.empty()
+                    : java.util.Optional.of(java.time.LocalDate.parse(study.date()));
+        } catch (java.time.format.DateTimeParseException e) {
+            return java.util.Optional.empty();
+        }
     }
 
     private double titleBlock(Graphics2D g) {

@@ -11,16 +11,25 @@ import java.io.IOException;
 import java.nio.charset.StandardCharsets;
 import java.security.MessageDigest;
 import java.security.NoSuchAlgorithmException;
+import java.time.LocalDate;
+import java.util.Calendar;
+import java.util.GregorianCalendar;
+import java.util.Locale;
+import java.util.Optional;
+import java.util.TimeZone;
 import java.util.function.Consumer;
 import org.apache.pdfbox.cos.COSArray;
 import org.apache.pdfbox.cos.COSName;
 import org.apache.pdfbox.cos.COSString;
 import org.apache.pdfbox.pdmodel.PDDocument;
+import org.apache.pdfbox.pdmodel.PDDocumentInformation;
 import org.apache.pdfbox.pdmodel.PDPage;
 import org.apache.pdfbox.pdmodel.PDPageContentStream;
 import org.apache.pdfbox.pdmodel.common.PDRectangle;
 import org.apache.pdfbox.pdmodel.graphics.form.PDFormXObject;
 import org.jfree.svg.SVGGraphics2D;
+import org.jfree.svg.SVGUnits;
+import org.jfree.svg.ViewBox;
 
 /**
  * Renders a painting, given in points (1/72 in), to SVG, PNG or PDF bytes. The output depends on
@@ -29,6 +38,8 @@ import org.jfree.svg.SVGGraphics2D;
  */
 public final class Drawing {
     private static final int PNG_DEFLATE_LEVEL = 3;
+    /** The PDF's creator: this tool, without a version, so that a rebuild gives the same bytes. */
+    private static final String CREATOR = "coordination (open-source protection coordination tool)";
 
     private Drawing() {
     }
@@ -46,10 +57,38 @@ public final class Drawing {
      */
     public static byte[] render(OutputFormat format, double widthPt, double heightPt, int dpi,
             Consumer<Graphics2D> painter) throws IOException {
+        return render(format, widthPt, heightPt, dpi, painter, new Info("", "", Optional.empty()));
+    }
+
+    /**
+     * What a document says about itself: the PDF's information dictionary. The date is the
+     * study's, never the clock's, so that the bytes stay the same from run to run.
+     *
+     * @param title the document title
+     * @param subject what it is
+     * @param created the creation date, if the study gives one
+     */
+    public record Info(String title, String subject, Optional<LocalDate> created) {
+    }
+
+    /**
+     * Renders a painting with a document title, subject and date.
+     *
+     * @param format the file format
+     * @param widthPt width in points
+     * @param heightPt height in points
+     * @param dpi resolution of PNG output in dots per inch (ignored for SVG and PDF)
+     * @param painter draws on a Graphics2D whose unit is one point
+     * @param info what the PDF says about itself (SVG and PNG carry their text in the drawing)
+     * @return the file's bytes
+     * @throws IOException if the encoder fails
+     */
+    public static byte[] render(OutputFormat format, double widthPt, double heightPt, int dpi,
+            Consumer<Graphics2D> painter, Info info) throws IOException {
         return switch (format) {
             case SVG -> svg(widthPt, heightPt, painter);
             case PNG -> png(widthPt, heightPt, dpi, painter);
-            case PDF -> pdf(widthPt, heightPt, painter);
+            case PDF -> pdf(widthPt, heightPt, painter, info);
         };
     }
 
@@ -61,7 +100,8 @@ public final class Drawing {
     }
 
     private static byte[] svg(double w, double h, Consumer<Graphics2D> painter) {
-        SVGGraphics2D g = new SVGGraphics2D(w, h);
+        // the page in points, so that it prints at its size; the viewBox below maps one point to one user unit
+        SVGGraphics2D g = new SVGGraphics2D(w, h, SVGUnits.PT);
         // a fixed prefix for clip and gradient ids: the default one is derived from the clock
         g.setDefsKeyPrefix("c");
         // a hundredth of a point is far below what any viewer shows, and halves the document
@@ -69,7 +109,9 @@ public final class Drawing {
         hints(g);
         painter.accept(g);
         g.dispose();
-        return g.getSVGDocument().getBytes(StandardCharsets.UTF_8);
+        // a viewBox, so that a browser scales the page to its window; the width and height stay in points
+        String svg = "<?xml version=\"1.0\"?>\n" + g.getSVGElement(null, true, new ViewBox(0, 0, w, h), null, null);
+        return svg.getBytes(StandardCharsets.UTF_8);
     }
 
     private static String twoDecimals(double v) {
@@ -112,8 +154,18 @@ public final class Drawing {
                 .withPhysicalPixelDimensions(PngEncoderPhysicalPixelDimensions.dotsPerInch(dpi)).toBytes();
     }
 
-    private static byte[] pdf(double w, double h, Consumer<Graphics2D> painter) throws IOException {
+    private static byte[] pdf(double w, double h, Consumer<Graphics2D> painter, Info info) throws IOException {
         try (PDDocument doc = new PDDocument()) {
+            PDDocumentInformation about = doc.getDocumentInformation();
+            about.setTitle(info.title().isEmpty() ? null : info.title());
+            about.setSubject(info.subject().isEmpty() ? null : info.subject());
+            about.setCreator(CREATOR);
+            info.created().ifPresent(d -> {
+                Calendar c = new GregorianCalendar(TimeZone.getTimeZone("UTC"), Locale.ROOT);
+                c.clear();
+                c.set(d.getYear(), d.getMonthValue() - 1, d.getDayOfMonth());
+                about.setCreationDate(c);
+            });
             PDRectangle size = new PDRectangle((float) w, (float) h);
             PDPage page = new PDPage(size);
             doc.addPage(page);
