@@ -25,12 +25,37 @@ import java.util.OptionalDouble;
  * @param cables the cables
  * @param devices the devices
  * @param checks the checks
+ * @param signOff the drawing number and the names of who prepared, checked and approved the study
  */
 public record Study(String name, String title, double voltageKv, double frequencyHz, String revision, String date,
-        PageSize page, List<StudyCable> cables, List<StudyDevice> devices, List<StudyCheck> checks) {
+        PageSize page, List<StudyCable> cables, List<StudyDevice> devices, List<StudyCheck> checks,
+        SignOff signOff) {
+
+    /**
+     * The sheet's sign-off block, each field empty where the study leaves it out (the sheet then
+     * leaves a line to write on).
+     *
+     * @param drawing the drawing number
+     * @param prepared who prepared the study
+     * @param checked who checked it
+     * @param approved who approved it
+     */
+    public record SignOff(String drawing, String prepared, String checked, String approved) {
+        /** A block with every field empty. */
+        public static final SignOff NONE = new SignOff("", "", "", "");
+
+        /** Requires every field, empty or not. */
+        public SignOff {
+            Checks.given("sign-off: drawing", drawing);
+            Checks.given("sign-off: prepared", prepared);
+            Checks.given("sign-off: checked", checked);
+            Checks.given("sign-off: approved", approved);
+        }
+    }
 
     /** Copies the lists in. */
     public Study {
+        Checks.given("study: sign-off", signOff);
         cables = List.copyOf(cables);
         devices = List.copyOf(devices);
         checks = List.copyOf(checks);
@@ -63,7 +88,7 @@ public record Study(String name, String title, double voltageKv, double frequenc
             cs.add(new StudyCable(c.limit(), c.sizeText(), c.fault().map(r -> r.scaled(minFactor, maxFactor)),
                     c.initialSource(), c.finalSource()));
         }
-        return new Study(name, title, voltageKv, frequencyHz, revision, date, page, cs, devices, scaled);
+        return new Study(name, title, voltageKv, frequencyHz, revision, date, page, cs, devices, scaled, signOff);
     }
 
     /** Sheet page sizes. */

@@ -101,6 +101,8 @@ public final class StudyReader {
     private static final NumberField TOL_PICKUP = number("pickup_percent", "%").from(0).to(50).required();
     private static final NumberField MULTIPLIER_LIMITS = number("", "").above(0).to(100);
     private static final NumberField MULTIPLIER_STEP = number("", "").above(0).to(10);
+    /** Longest sign-off field, in characters. */
+    private static final int MAX_SIGN_OFF = 40;
     private static final NumberField PICKUP_STEP = number("pickup_step_a", "A").above(0).to(1e4);
     private static final NumberField LOAD = number("load_a", "A").above(0).to(1e6);
     private static final NumberField SENSITIVITY = number("sensitivity_factor", "").from(1).to(10)
@@ -271,7 +273,7 @@ public final class StudyReader {
         }
         Node.MapNode root = mapped.get();
         b.allowOnly(root, "", "format", "title", "voltage_kv", "frequency_hz", "revision", "date", "page", "cables",
-                "devices", "checks");
+                "devices", "checks", "sign_off");
         if (!b.has(root, "format")) {
             b.missing(root, "", "format", "write 'format: 1'");
         } else {
@@ -289,6 +291,7 @@ public final class StudyReader {
         Optional<String> revision = b.optionalText(root, "", "revision");
         Optional<String> date = b.has(root, "date") ? scalarText(root, "date") : Optional.empty();
         Optional<Study.PageSize> page = b.choice(root, "", "page", PAGES, Study.PageSize.A4);
+        Study.SignOff signOff = signOff(root);
 
         Map<String, Study.StudyCable> cables = items(root, "cables", "cable", this::cable, Study.StudyCable::id);
         Map<String, Study.StudyDevice> devices = items(root, "devices", "device", this::device, Study.StudyDevice::id);
@@ -306,7 +309,31 @@ public final class StudyReader {
         }
         return Optional.of(new Study(name, title.get(), studyKv.getAsDouble(), frequency.getAsDouble(), revision.orElse(""),
                 date.orElse(""), page.orElseThrow(), List.copyOf(cables.values()), List.copyOf(devices.values()),
-                checks));
+                checks, signOff));
+    }
+
+    /** The optional sign-off block: short texts, so that the title block shows them whole. */
+    private Study.SignOff signOff(Node.MapNode root) {
+        if (!b.has(root, "sign_off")) {
+            return Study.SignOff.NONE;
+        }
+        Optional<Node.MapNode> m = b.map(b.value(root, "sign_off"), "sign_off");
+        if (m.isEmpty()) {
+            return Study.SignOff.NONE;
+        }
+        String[] keys = {"drawing", "prepared", "checked", "approved"};
+        b.allowOnly(m.get(), "sign_off", keys);
+        String[] v = new String[keys.length];
+        for (int i = 0; i < keys.length; i++) {
+            Optional<String> t = b.optionalText(m.get(), "sign_off", keys[i]);
+            if (t.isPresent() && t.get().length() > MAX_SIGN_OFF) {
+                b.problem(b.value(m.get(), keys[i]), "sign_off." + keys[i], "found " + t.get().length()
+                        + " characters - at most " + MAX_SIGN_OFF + ", so that the title block shows it whole");
+                t = Optional.empty();
+            }
+            v[i] = t.orElse("");
+        }
+        return new Study.SignOff(v[0], v[1], v[2], v[3]);
     }
 
     /** Reads the items of a list of identified things: each is declared, read and registered once by id. */

@@ -38,6 +38,12 @@ public final class CoordinationSheet {
     public static final String SCOPE = "Scope: each check covers its stated fault-current range only; overload"
             + " protection of the cables (currents below the ranges) is not part of these checks.";
 
+    /** Line height of the notes, in points. */
+    private static final double NOTE_LINE = 7.2;
+    /** Font size of the notes. */
+    private static final float NOTE_FONT = 6.2f;
+    /** Most lines of notes on a sheet; the rest are counted and stay in the report. */
+    private static final int MAX_NOTE_LINES = 16;
     private static final double MM_TO_PT = 72.0 / 25.4;
     private static final double MARGIN = 22;
 
@@ -98,15 +104,25 @@ public final class CoordinationSheet {
         double top = titleBlock(g);
         double footerTop = height - MARGIN - 30;
         double chartW = Math.round((width - 2 * MARGIN) * 0.58);
-        double resultsH = Math.min(130, 28 + 11 * Math.max(1, report.results().size()));
-        double chartBottom = footerTop - resultsH - 6;
+        int rows = 0;
+        for (CheckResult o : report.results()) {
+            rows += o.pass() ? 1 : 2;
+        }
+        double resultsH = Math.min(140, 28 + 10 * Math.max(1, rows));
+        List<String> notes = noteLines(g, notes(), width - 2 * MARGIN, MAX_NOTE_LINES);
+        double notesH = notes.isEmpty() ? 0 : 16 + NOTE_LINE * notes.size();
+        double notesTop = footerTop - notesH;
+        double chartBottom = notesTop - resultsH - 6;
         double chartH = chartBottom - top - 4;
         chart(g, MARGIN, top + 4, chartW, chartH);
         double rightX = MARGIN + chartW + 12;
         double rightW = width - MARGIN - rightX;
-        double y = devicesTable(g, rightX, top + 4, rightW, top + 4 + chartH * 0.52);
+        double y = devicesTable(g, rightX, top + 4, rightW, chartBottom - cablesHeight() - 6);
         cablesTable(g, rightX, y + 6, rightW, chartBottom);
-        resultsTable(g, MARGIN, chartBottom + 4, width - 2 * MARGIN, footerTop - 4);
+        resultsTable(g, MARGIN, chartBottom + 4, width - 2 * MARGIN, notesTop - 4);
+        if (!notes.isEmpty()) {
+            notesTable(g, notes, MARGIN, notesTop, width - 2 * MARGIN);
+        }
         footer(g, footerTop);
     }
 
@@ -138,6 +154,7 @@ public final class CoordinationSheet {
         }
         facts.add("study " + study.name());
         text(g, String.join("   ·   ", facts), x, y + 25);
+        signOff(g, x, y + 38);
         // verdict box, worded as well as coloured
         boolean pass = report.pass();
         int fails = report.failures();
@@ -154,8 +171,32 @@ public final class CoordinationSheet {
         text(g, verdict, bx + 8, y + 15);
         g.setColor(Palette.MARK);
         g.setStroke(new BasicStroke(0.6f));
-        g.draw(new Line2D.Double(MARGIN, y + 31, width - MARGIN, y + 31));
-        return y + 33;
+        g.draw(new Line2D.Double(MARGIN, y + 43, width - MARGIN, y + 43));
+        return y + 45;
+    }
+
+    /** Drawing number and signatures: the names the study gives, or a line to write on. */
+    private void signOff(Graphics2D g, double x, double y) {
+        Study.SignOff s = study.signOff();
+        String[][] fields = {{"drawing", s.drawing()}, {"prepared", s.prepared()}, {"checked", s.checked()},
+            {"approved", s.approved()}};
+        g.setFont(Palette.font(Font.PLAIN, 8f));
+        FontMetrics fm = g.getFontMetrics();
+        double cx = x;
+        for (String[] f : fields) {
+            g.setColor(Palette.MARK);
+            text(g, f[0], cx, y);
+            cx += fm.stringWidth(f[0]) + 4;
+            g.setColor(Color.BLACK);
+            double w = Math.max(90, fm.stringWidth(f[1]) + 6);
+            if (f[1].isEmpty()) {
+                g.setStroke(new BasicStroke(0.5f));
+                g.draw(new Line2D.Double(cx, y + 1.5, cx + w, y + 1.5));
+            } else {
+                text(g, f[1], cx, y);
+            }
+            cx += w + 14;
+        }
     }
 
     private void chart(Graphics2D g, double x, double y, double w, double h) {
@@ -185,10 +226,17 @@ public final class CoordinationSheet {
         // how to read the curves, so that a relay's thin operating line is not taken for another device
         g.setFont(Palette.font(Font.PLAIN, 6.5f));
         g.setColor(Palette.MARK);
-        text(g, fit(g, "Thick line: clearing time (relays with breaker time). Thin line: relay operating time.", w),
-                x, cy + 7);
-        text(g, fit(g, "Shaded band: fastest to slowest tolerance of fuses and breakers.", w), x, cy + 15);
-        cy += 19;
+        String[] key = {
+            "Thick line: clearing time (a relay's with its breaker). Thin line: a relay's operating time.",
+            "Band: a fuse from melting to clearing, a breaker's tolerance, a relay's operating spread.",
+            "Cable: solid from 0.1 s to 5 s (the adiabatic window), dashed outside it; grey: damage zone.",
+            "Diamond: minimum margin of a cable check. Cross: a crossing of the curves.",
+        };
+        for (String k : key) {
+            text(g, fit(g, k, w), x, cy + 7);
+            cy += 8;
+        }
+        cy += 3;
         g.setFont(Palette.font(Font.PLAIN, 7f));
         int index = 0;
         int shown = 0;
@@ -220,6 +268,15 @@ public final class CoordinationSheet {
             cy += 9;
         }
         return cy;
+    }
+
+    /** Height of the cables table: a heading, then up to five lines and a gap per cable. */
+    private double cablesHeight() {
+        double h = 14;
+        for (Study.StudyCable c : study.cables()) {
+            h += 9 * (c.fault().isPresent() ? 5 : 4) + 2;
+        }
+        return Math.min(h, 14 + 3 * 47);
     }
 
     private void cablesTable(Graphics2D g, double x, double y, double w, double bottom) {
@@ -275,17 +332,21 @@ public final class CoordinationSheet {
 
     private void resultsTable(Graphics2D g, double x, double y, double w, double bottom) {
         double cy = heading(g, "Checks", x, y, w);
-        double[] col = {x, x + w * 0.30, x + w * 0.49, x + w * 0.63, x + w * 0.80, x + w * 0.90};
-        String[] head = {"check", "minimum margin / interval", "at", "crossings", "required", "verdict"};
+        double[] col = {x, x + w * 0.25, x + w * 0.38, x + w * 0.45, x + w * 0.55, x + w * 0.62, x + w * 0.77,
+            x + w * 0.90};
+        String[] head = {"check", "least margin / interval", "at", "least ratio", "at", "crossings", "required",
+            "verdict"};
         g.setFont(Palette.font(Font.BOLD, 7f));
         g.setColor(Palette.MARK);
         for (int i = 0; i < head.length; i++) {
-            text(g, head[i], col[i], cy + 7.5);
+            double cw = (i + 1 < col.length ? col[i + 1] : x + w) - col[i] - 4;
+            text(g, fit(g, head[i], cw), col[i], cy + 7.5);
         }
         cy += 10;
         int shown = 0;
         for (CheckResult o : report.results()) {
-            if (cy + 10 > bottom) {
+            int rows = o.pass() ? 1 : 2;
+            if (cy + 10 * rows > bottom) {
                 break;
             }
             String[] cells = cells(o);
@@ -300,6 +361,13 @@ public final class CoordinationSheet {
                 text(g, fit(g, cells[i], cw), col[i], cy + 7.5);
             }
             cy += 10;
+            if (!pass) {
+                // a failing check says why, as the check command does
+                g.setFont(Palette.font(Font.PLAIN, 7f));
+                g.setColor(Palette.FAIL);
+                text(g, fit(g, "why: " + o.reason(), w - (col[1] - x)), col[1], cy + 7.5);
+                cy += 10;
+            }
             shown++;
         }
         if (shown < report.results().size()) {
@@ -311,21 +379,73 @@ public final class CoordinationSheet {
     private static String[] cells(CheckResult o) {
         String verdict = o.pass() ? "pass" : "FAIL";
         if (o instanceof CableCheckResult r) {
+            boolean margin = Double.isFinite(r.minMarginSeconds());
+            boolean ratio = Double.isFinite(r.minRatio());
             return new String[] {r.device() + " protects " + r.cable(),
-                Double.isNaN(r.undefinedFromAmps()) && Double.isNaN(r.notClearedFromAmps())
-                    && Double.isFinite(r.minMarginSeconds())
-                    ? seconds(r.minMarginSeconds()) + " s (ratio " + Quantities.significant(r.minRatio(), 3) + ")"
-                    : r.reason(),
-                Double.isFinite(r.minMarginSeconds()) ? kiloamps(r.minMarginAtAmps()) + " kA" : "",
+                margin ? seconds(r.minMarginSeconds()) + " s" : "none",
+                margin ? Quantities.current(r.minMarginAtAmps(), 3) : "",
+                ratio ? Quantities.significant(r.minRatio(), 3) : "none",
+                ratio ? Quantities.current(r.minRatioAtAmps(), 3) : "",
                 crossings(r.crossingsAmps()), r.requirement().toString(), verdict};
         }
         if (o instanceof GradingCheckResult r) {
+            boolean interval = Double.isFinite(r.minIntervalSeconds());
+            boolean energy = Double.isFinite(r.minEnergyRatio());
             return new String[] {r.downstream() + " grades under " + r.upstream(),
-                Double.isFinite(r.minIntervalSeconds()) ? seconds(r.minIntervalSeconds()) + " s" : r.reason(),
-                Double.isFinite(r.minIntervalSeconds()) ? kiloamps(r.minIntervalAtAmps()) + " kA" : "",
+                interval ? seconds(r.minIntervalSeconds()) + " s" : "none",
+                interval ? Quantities.current(r.minIntervalAtAmps(), 3) : "",
+                energy ? Quantities.significant(r.minEnergyRatio(), 3) + " (I²t)" : Double.isFinite(r.ratingRatio())
+                    ? Quantities.significant(r.ratingRatio(), 3) + " (rating)" : "",
+                energy ? Quantities.current(r.minEnergyRatioAtAmps(), 3) : "",
                 crossings(r.crossingsAmps()), r.requirement().toString(), verdict};
         }
         throw new IllegalStateException("no table row for a result of kind " + o.getClass().getSimpleName());
+    }
+
+    /** Every assumption and warning of the report, each once, assumptions first. */
+    private List<String> notes() {
+        java.util.LinkedHashSet<String> out = new java.util.LinkedHashSet<>();
+        for (StudyReport.CheckNotes n : report.notes()) {
+            n.assumptions().forEach(a -> out.add("assumed: " + a.message()));
+        }
+        for (StudyReport.CheckNotes n : report.notes()) {
+            n.warnings().forEach(w -> out.add("warning: " + w.message()));
+        }
+        report.warnings().forEach(w -> out.add("warning: " + w.message()));
+        return new ArrayList<>(out);
+    }
+
+    /** The notes wrapped to the page width, with the lines that do not fit counted in a last line. */
+    private List<String> noteLines(Graphics2D g, List<String> notes, double w, int maxLines) {
+        g.setFont(Palette.font(Font.PLAIN, NOTE_FONT));
+        List<String> lines = new ArrayList<>();
+        int shown = 0;
+        for (String n : notes) {
+            List<String> wrapped = wrap(g, n, w);
+            if (lines.size() + wrapped.size() > maxLines - (shown + 1 < notes.size() ? 1 : 0)) {
+                lines.add("+ " + (notes.size() - shown) + " more in the report");
+                return lines;
+            }
+            for (int i = 0; i < wrapped.size(); i++) {
+                lines.add((i == 0 ? "" : "    ") + wrapped.get(i));
+            }
+            shown++;
+        }
+        return lines;
+    }
+
+    private void notesTable(Graphics2D g, List<String> lines, double x, double y, double w) {
+        double cy = heading(g, "What the results rest on", x, y, w);
+        g.setFont(Palette.font(Font.PLAIN, NOTE_FONT));
+        boolean warning = false;
+        for (String line : lines) {
+            if (!line.startsWith("    ")) {
+                warning = line.startsWith("warning");
+            }
+            g.setColor(warning ? Palette.FAIL : Color.BLACK);
+            text(g, line, x, cy + 6);
+            cy += NOTE_LINE;
+        }
     }
 
     private void footer(Graphics2D g, double y) {
@@ -349,9 +469,9 @@ public final class CoordinationSheet {
         }
         List<String> s = new ArrayList<>();
         for (double a : amps) {
-            s.add(kiloamps(a));
+            s.add(Quantities.current(a, 3));
         }
-        return String.join(", ", s) + " kA";
+        return String.join(", ", s);
     }
 
     private static String seconds(double s) {

@@ -91,6 +91,36 @@ class SheetRenderTest {
         assertThat(text, containsString(CoordinationSheet.SCOPE));
     }
 
+    /** Every assumption and warning of the report is on the sheet; a failing check says why. */
+    @ParameterizedTest
+    @MethodSource("samples")
+    void theSheetPrintsWhatTheResultsRestOnAndWhyACheckFails(Path file) throws Exception {
+        Study s = StudyReader.read(file);
+        StudyReport r = StudyReport.evaluate(s);
+        String text = svgText(s).replaceAll("\\s+", "");
+        List<String> expected = new ArrayList<>();
+        r.notes().forEach(n -> n.assumptions().forEach(a -> expected.add(a.message())));
+        r.notes().forEach(n -> n.warnings().forEach(w -> expected.add(w.message())));
+        r.warnings().forEach(w -> expected.add(w.message()));
+        for (String m : expected) {
+            // wrapped lines are separate text elements, so compare without white space
+            assertThat(text, containsString(m.replaceAll("\\s+", "")));
+        }
+        for (var o : r.results()) {
+            if (!o.pass()) {
+                assertThat(text, containsString(("why: " + o.reason()).replaceAll("\\s+", "")));
+            }
+        }
+    }
+
+    @org.junit.jupiter.api.Test
+    void theTitleBlockCarriesTheSignOff() throws Exception {
+        String text = svgText(StudyReader.read(Path.of("../samples/01-main-switchboard-incomer.yaml")));
+        assertThat(text, containsString("RW-E-0101"));
+        assertThat(text, containsString("A. N. Engineer"));
+        assertThat(text, containsString("approved"));
+    }
+
     @org.junit.jupiter.api.Test
     void temperaturesAreNotRoundedToOneFigure() throws Exception {
         Study s = StudyReader.read(Path.of("../samples/03-dosing-room-mcbs.yaml"));
