@@ -11,6 +11,8 @@ module coordination.plot {
     requires org.jfree.svg;
     requires de.rototor.pdfbox.graphics2d;
     requires org.apache.pdfbox;
+    requires org.apache.fontbox;
+    requires org.apache.pdfbox.io;
     requires pngencoder;
     requires static info.picocli;
 
@@ -19,4 +21,6 @@ module coordination.plot {
     exports coordination.plot.sheet;
 
     opens coordination.plot.cli to info.picocli;
+    // the shipped fonts are read as resources of this module
+    opens coordination.plot.fonts;
 }

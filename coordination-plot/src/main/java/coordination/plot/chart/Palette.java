@@ -3,8 +3,6 @@ package coordination.plot.chart;
 import java.awt.BasicStroke;
 import java.awt.Color;
 import java.awt.Font;
-import java.awt.GraphicsEnvironment;
-import java.util.Arrays;
 
 /**
  * The project's drawing style. Device colours are taken from the colour-blind-safe set of Okabe and
@@ -38,15 +36,10 @@ public final class Palette {
     public static final Color PASS = new Color(0x00, 0x6D, 0x4F);
     /** Text of failing verdicts. */
     public static final Color FAIL = new Color(0xB0, 0x3A, 0x00);
-    /** The font family used throughout, the same on every machine that has it. */
-    public static final String FONT_FAMILY = fontFamily();
+    /** The font family used throughout, shipped with the jar ({@link Fonts}). */
+    public static final String FONT_FAMILY = "Liberation Sans";
 
     private Palette() {
-    }
-
-    private static String fontFamily() {
-        String[] names = GraphicsEnvironment.getLocalGraphicsEnvironment().getAvailableFontFamilyNames(java.util.Locale.ROOT);
-        return Arrays.asList(names).contains("DejaVu Sans") ? "DejaVu Sans" : Font.SANS_SERIF;
     }
 
     /**
@@ -57,7 +50,7 @@ public final class Palette {
      * @return the font
      */
     public static Font font(int style, float size) {
-        return new Font(FONT_FAMILY, style, 1).deriveFont(size);
+        return Fonts.of(style, size);
     }
 
     /**

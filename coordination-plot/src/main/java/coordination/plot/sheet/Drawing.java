@@ -2,7 +2,9 @@ package coordination.plot.sheet;
 
 import com.pngencoder.PngEncoder;
 import com.pngencoder.PngEncoderPhysicalPixelDimensions;
+import coordination.plot.chart.Fonts;
 import de.rototor.pdfbox.graphics2d.PdfBoxGraphics2D;
+import de.rototor.pdfbox.graphics2d.PdfBoxGraphics2DFontTextDrawer;
 import java.awt.Graphics2D;
 import java.awt.RenderingHints;
 import java.awt.image.BufferedImage;
@@ -99,7 +101,7 @@ public final class Drawing {
         g.setRenderingHint(RenderingHints.KEY_FRACTIONALMETRICS, RenderingHints.VALUE_FRACTIONALMETRICS_ON);
     }
 
-    private static byte[] svg(double w, double h, Consumer<Graphics2D> painter) {
+    private static byte[] svg(double w, double h, Consumer<Graphics2D> painter) throws IOException {
         // the page in points, so that it prints at its size; the viewBox below maps one point to one user unit
         SVGGraphics2D g = new SVGGraphics2D(w, h, SVGUnits.PT);
         // a fixed prefix for clip and gradient ids: the default one is derived from the clock
@@ -111,7 +113,7 @@ public final class Drawing {
         g.dispose();
         // a viewBox, so that a browser scales the page to its window; the width and height stay in points
         String svg = "<?xml version=\"1.0\"?>\n" + g.getSVGElement(null, true, new ViewBox(0, 0, w, h), null, null);
-        return svg.getBytes(StandardCharsets.UTF_8);
+        return SvgFonts.embed(svg).getBytes(StandardCharsets.UTF_8);
     }
 
     private static String twoDecimals(double v) {
@@ -155,7 +157,8 @@ public final class Drawing {
     }
 
     private static byte[] pdf(double w, double h, Consumer<Graphics2D> painter, Info info) throws IOException {
-        try (PDDocument doc = new PDDocument()) {
+        try (PDDocument doc = new PDDocument();
+                PdfBoxGraphics2DFontTextDrawer fonts = new PdfBoxGraphics2DFontTextDrawer()) {
             PDDocumentInformation about = doc.getDocumentInformation();
             about.setTitle(info.title().isEmpty() ? null : info.title());
             about.setSubject(info.subject().isEmpty() ? null : info.subject());
@@ -170,6 +173,13 @@ public final class Drawing {
             PDPage page = new PDPage(size);
             doc.addPage(page);
             PdfBoxGraphics2D g = new PdfBoxGraphics2D(doc, size);
+            // text as text: the shipped faces are embedded (as subsets), so that it can be selected and searched
+            for (String file : new String[] {Fonts.REGULAR_FILE, Fonts.BOLD_FILE}) {
+                try (java.io.InputStream in = Fonts.open(file)) {
+                    fonts.registerFont(in);
+                }
+            }
+            g.setFontTextDrawer(fonts);
             hints(g);
             painter.accept(g);
             g.dispose();

@@ -1,0 +1,94 @@
+package coordination.plot.sheet;
+
+import coordination.plot.chart.Fonts;
+import java.io.ByteArrayOutputStream;
+import java.io.IOException;
+import java.io.InputStream;
+import java.util.Base64;
+import java.util.TreeSet;
+import java.util.regex.Matcher;
+import java.util.regex.Pattern;
+import org.apache.fontbox.ttf.TTFParser;
+import org.apache.fontbox.ttf.TTFSubsetter;
+import org.apache.fontbox.ttf.TrueTypeFont;
+import org.apache.pdfbox.io.RandomAccessReadBuffer;
+
+/**
+ * Embeds the sheet's faces in an SVG document as {@code @font-face} rules, each a subset holding
+ * just the characters the document's text uses, so that a browser shows the text in the faces it
+ * was measured in, and the text stays text.
+ */
+final class SvgFonts {
+    private static final Pattern TEXT = Pattern.compile("<text[^>]*>([^<]*)</text>");
+    private static final Pattern ENTITY = Pattern.compile("&(#x[0-9a-fA-F]+|#[0-9]+|amp|lt|gt|quot|apos);");
+
+    private static final java.util.List<String> TABLES = java.util.List.of("head", "hhea", "maxp", "OS/2", "cmap",
+            "hmtx", "loca", "glyf", "name", "post", "cvt ", "fpgm", "prep", "gasp");
+
+    private SvgFonts() {
+    }
+
+    /**
+     * Adds the font faces to a document.
+     *
+     * @param svg the document, with its {@code <svg ...>} element
+     * @return the document with a {@code <style>} element first inside the root
+     * @throws IOException if a face cannot be read or subset
+     */
+    static String embed(String svg) throws IOException {
+        TreeSet<Integer> used = new TreeSet<>();
+        Matcher m = TEXT.matcher(svg);
+        while (m.find()) {
+            unescape(m.group(1)).codePoints().forEach(used::add);
+        }
+        if (used.isEmpty()) {
+            return svg;
+        }
+        StringBuilder style = new StringBuilder("<style>");
+        face(style, Fonts.REGULAR_FILE, "normal", used);
+        face(style, Fonts.BOLD_FILE, "bold", used);
+        style.append("</style>");
+        int root = svg.indexOf("<svg");
+        int end = svg.indexOf('>', root) + 1;
+        return svg.substring(0, end) + style + svg.substring(end);
+    }
+
+    private static void face(StringBuilder style, String file, String weight, TreeSet<Integer> used)
+            throws IOException {
+        byte[] bytes;
+        try (InputStream in = Fonts.open(file)) {
+            bytes = in.readAllBytes();
+        }
+        ByteArrayOutputStream out = new ByteArrayOutputStream();
+        try (TrueTypeFont ttf = new TTFParser().parse(new RandomAccessReadBuffer(bytes))) {
+            // the layout tables (GPOS, GSUB, kern) would keep the whole font's glyph numbers; Java 2D
+            // measured the text without them, so the browser draws it without them too
+            TTFSubsetter subset = new TTFSubsetter(ttf, TABLES);
+            subset.addAll(used);
+            subset.writeToStream(out);
+        }
+        style.append("@font-face{font-family:\"").append(coordination.plot.chart.Palette.FONT_FAMILY)
+                .append("\";font-weight:").append(weight).append(";src:url(data:font/ttf;base64,")
+                .append(Base64.getEncoder().encodeToString(out.toByteArray())).append(") format(\"truetype\");}");
+    }
+
+    private static String unescape(String s) {
+        Matcher m = ENTITY.matcher(s);
+        StringBuilder out = new StringBuilder();
+        while (m.find()) {
+            String e = m.group(1);
+            String r = switch (e) {
+                case "amp" -> "&";
+                case "lt" -> "<";
+                case "gt" -> ">";
+                case "quot" -> "\"";
+                case "apos" -> "'";
+                default -> new String(Character.toChars(e.startsWith("#x") ? Integer.parseInt(e.substring(2), 16)
+                        : Integer.parseInt(e.substring(1))));
+            };
+            m.appendReplacement(out, Matcher.quoteReplacement(r));
+        }
+        m.appendTail(out);
+        return out.toString();
+    }
+}
