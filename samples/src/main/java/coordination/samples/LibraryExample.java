@@ -48,7 +48,7 @@ public final class LibraryExample {
 
         TimeCurrentChart chart = new TimeCurrentChart(new ChartContent("B5 with a 25 mm² cable", 0.4, List.of(relay),
                 List.of(cable), 1_000, 10_000, List.of(result), List.of()), 800, 600);
-        byte[] png = Drawing.render(OutputFormat.PNG, 800, 600, 150, g -> chart.chart().paint(g, 800, 600));
+        byte[] png = Drawing.render(OutputFormat.PNG, 800, 600, 150, chart::paint);
         Path out = Path.of(args.length > 0 ? args[0] : "out");
         SheetWriter.write(out, java.util.Map.of("library-example.png", png));
         System.out.println("wrote " + out.resolve("library-example.png"));

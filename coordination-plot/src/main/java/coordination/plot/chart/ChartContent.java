@@ -17,26 +17,55 @@ import java.util.List;
  * @param referenceKv reference voltage of the current axis in kV
  * @param devices devices to draw, in legend order
  * @param cables cable limits to draw
- * @param faultMinAmps lowest prospective fault current to mark, or NaN
- * @param faultMaxAmps highest prospective fault current to mark, or NaN
+ * @param faults prospective fault-current ranges to mark, one per cable that has one
  * @param cableResults cable check results whose crossings and minimum margins are marked
- * @param gradingResults grading results whose crossings are marked
+ * @param gradingResults grading results whose ranges and crossings are marked
  */
 public record ChartContent(String title, double referenceKv, List<ProtectiveDevice> devices,
-        List<CableThermalLimit> cables, double faultMinAmps, double faultMaxAmps, List<CableCheckResult> cableResults,
+        List<CableThermalLimit> cables, List<FaultRange> faults, List<CableCheckResult> cableResults,
         List<GradingCheckResult> gradingResults) {
+
+    /**
+     * A cable's prospective fault currents.
+     *
+     * @param cable the cable's id, or empty for a chart of one range
+     * @param minAmps lowest fault current
+     * @param maxAmps highest fault current
+     */
+    public record FaultRange(String cable, double minAmps, double maxAmps) {
+    }
 
     /** Copies the lists in. */
     public ChartContent {
         devices = List.copyOf(devices);
         cables = List.copyOf(cables);
+        faults = List.copyOf(faults);
         cableResults = List.copyOf(cableResults);
         gradingResults = List.copyOf(gradingResults);
     }
 
     /**
-     * The chart of a whole study: every device (referred to the reference voltage), every cable,
-     * the widest fault range of its cables and every check's result.
+     * A chart with one fault range, or none.
+     *
+     * @param title chart title
+     * @param referenceKv reference voltage in kV
+     * @param devices devices to draw
+     * @param cables cable limits to draw
+     * @param faultMinAmps lowest prospective fault current to mark, or NaN for none
+     * @param faultMaxAmps highest prospective fault current to mark, or NaN
+     * @param cableResults cable check results to mark
+     * @param gradingResults grading results to mark
+     */
+    public ChartContent(String title, double referenceKv, List<ProtectiveDevice> devices,
+            List<CableThermalLimit> cables, double faultMinAmps, double faultMaxAmps,
+            List<CableCheckResult> cableResults, List<GradingCheckResult> gradingResults) {
+        this(title, referenceKv, devices, cables, Double.isNaN(faultMinAmps) ? List.of()
+                : List.of(new FaultRange("", faultMinAmps, faultMaxAmps)), cableResults, gradingResults);
+    }
+
+    /**
+     * The chart of a whole study: every device (referred to the reference voltage), every cable
+     * with its own fault range (stated, or its first cable check's), and every check's result.
      *
      * @param study the study
      * @param report its evaluated report
@@ -48,17 +77,31 @@ public record ChartContent(String title, double referenceKv, List<ProtectiveDevi
             devices.add(d.referred());
         }
         List<CableThermalLimit> cables = new ArrayList<>();
-        double lo = Double.NaN;
-        double hi = Double.NaN;
+        List<FaultRange> faults = new ArrayList<>();
+        boolean named = study.cables().size() > 1;
         for (Study.StudyCable c : study.cables()) {
             cables.add(c.limit());
-            if (c.fault().isPresent()) {
-                Study.CurrentRange f = c.fault().get();
-                lo = Double.isNaN(lo) ? f.fromAmps() : Math.min(lo, f.fromAmps());
-                hi = Double.isNaN(hi) ? f.toAmps() : Math.max(hi, f.toAmps());
+            Study.CurrentRange range = c.fault().orElse(null);
+            for (Study.StudyCheck check : study.checks()) {
+                if (range == null && check instanceof Study.CableCheckSpec cc && cc.cable().equals(c.id())) {
+                    range = cc.range();
+                }
+            }
+            if (range != null) {
+                faults.add(new FaultRange(named ? c.id() : "", range.fromAmps(), range.toAmps()));
             }
         }
-        return new ChartContent(study.title(), study.voltageKv(), devices, cables, lo, hi,
+        return new ChartContent(study.title(), study.voltageKv(), devices, cables, faults,
                 report.results(CableCheckResult.class), report.results(GradingCheckResult.class));
+    }
+
+    /** @return the lowest fault current of any range, or NaN without ranges */
+    public double faultMinAmps() {
+        return faults.stream().mapToDouble(FaultRange::minAmps).min().orElse(Double.NaN);
+    }
+
+    /** @return the highest fault current of any range, or NaN without ranges */
+    public double faultMaxAmps() {
+        return faults.stream().mapToDouble(FaultRange::maxAmps).max().orElse(Double.NaN);
     }
 }

@@ -81,7 +81,41 @@ public final class Palette {
      */
     public static Color band(int n) {
         Color c = device(n);
-        return new Color(c.getRed(), c.getGreen(), c.getBlue(), 0x38);
+        return new Color(c.getRed(), c.getGreen(), c.getBlue(), 0x2C);
+    }
+
+    /**
+     * The damage zone's tint when a chart has several cables: lighter with each, so that where
+     * the zones overlap the grey stays light and the bands stay readable on it.
+     *
+     * @param cables the number of cables on the chart
+     * @return a translucent grey
+     */
+    public static Color damaged(int cables) {
+        int alpha = Math.max(0x12, DAMAGED.getAlpha() / Math.max(1, cables));
+        return new Color(DAMAGED.getRed(), DAMAGED.getGreen(), DAMAGED.getBlue(), alpha);
+    }
+
+    /**
+     * The solid line of the n-th cable's damage limit.
+     *
+     * @param n index from 0
+     * @param width line width in points
+     * @return the stroke
+     */
+    public static BasicStroke cableStroke(int n, float width) {
+        return new BasicStroke(width, BasicStroke.CAP_BUTT, BasicStroke.JOIN_ROUND);
+    }
+
+    /**
+     * The dotted style of a let-through energy drawn as I²t / I².
+     *
+     * @param width line width in points
+     * @return the stroke
+     */
+    public static BasicStroke letThrough(float width) {
+        return new BasicStroke(width, BasicStroke.CAP_ROUND, BasicStroke.JOIN_ROUND, 10f, new float[] {0.1f, 2.6f},
+                0f);
     }
 
     /**
@@ -92,7 +126,8 @@ public final class Palette {
      * @return the stroke
      */
     public static BasicStroke deviceStroke(int n, float width) {
-        float[] dash = DASHES[n % DASHES.length];
+        // past the sixth device the colours repeat, each with another dash pattern than before
+        float[] dash = DASHES[(n + n / DEVICE.length) % DASHES.length];
         return dash == null ? new BasicStroke(width, BasicStroke.CAP_BUTT, BasicStroke.JOIN_ROUND)
                 : new BasicStroke(width, BasicStroke.CAP_BUTT, BasicStroke.JOIN_ROUND, 10f, dash, 0f);
     }

@@ -43,7 +43,7 @@ public final class CoordinationSheet {
     /** Font size of the notes. */
     private static final float NOTE_FONT = 6.2f;
     /** Most lines of notes on a sheet; the rest are counted and stay in the report. */
-    private static final int MAX_NOTE_LINES = 16;
+    private static final int MAX_NOTE_LINES = 18;
     private static final double MM_TO_PT = 72.0 / 25.4;
     private static final double MARGIN = 22;
 
@@ -117,8 +117,7 @@ public final class CoordinationSheet {
         chart(g, MARGIN, top + 4, chartW, chartH);
         double rightX = MARGIN + chartW + 12;
         double rightW = width - MARGIN - rightX;
-        double y = devicesTable(g, rightX, top + 4, rightW, chartBottom - cablesHeight() - 6);
-        cablesTable(g, rightX, y + 6, rightW, chartBottom);
+        settingsColumn(g, rightX, top + 4, rightW, chartBottom);
         resultsTable(g, MARGIN, chartBottom + 4, width - 2 * MARGIN, notesTop - 4);
         if (!notes.isEmpty()) {
             notesTable(g, notes, MARGIN, notesTop, width - 2 * MARGIN);
@@ -207,7 +206,7 @@ public final class CoordinationSheet {
         TimeCurrentChart tcc = chart;
         AffineTransform saved = g.getTransform();
         g.translate(x, y);
-        tcc.chart().paint(g, (int) w, (int) h);
+        tcc.paint(g);
         g.setTransform(saved);
     }
 
@@ -221,7 +220,29 @@ public final class CoordinationSheet {
         return y + 14;
     }
 
-    private double devicesTable(Graphics2D g, double x, double y, double w, double bottom) {
+    /** A block of the settings column: a device (with its line sample) or a cable, or a heading. */
+    private record Block(List<String> lines, int device, boolean heading) {
+    }
+
+    private List<String> cableLines(Study.StudyCable c) {
+        CableThermalLimit l = c.limit();
+        return List.of(l.id(),
+                l.material().key() + ", " + l.insulation().key() + ", " + (l.parallel() > 1 ? l.parallel() + " x " : "")
+                    + c.sizeText() + ", " + l.method().key(),
+                "k " + Quantities.significant(l.k(), 3) + ", " + initial(c) + " to "
+                    + Quantities.asGiven(l.finalCelsius()) + " °C" + (c.finalSource()
+                    == Study.TemperatureSource.INSULATION_DEFAULT ? " (default)" : ""),
+                "I²t " + engineering(l.i2tA2s()) + "A²s" + c.fault().map(f -> ", faults "
+                    + kiloamps(f.fromAmps()) + " to " + kiloamps(f.toAmps()) + " kA").orElse(""),
+                "withstand " + kiloamps(l.withstandAmps(0.1)) + " / " + kiloamps(l.withstandAmps(1.0)) + " / "
+                    + kiloamps(l.withstandAmps(5.0)) + " kA at 0.1 / 1 / 5 s");
+    }
+
+    /**
+     * The devices with their settings, then the cables: in one column at 7 pt where they fit,
+     * else flowing through two narrower columns at 6.3 pt.
+     */
+    private void settingsColumn(Graphics2D g, double x, double y, double w, double bottom) {
         double cy = heading(g, "Devices and settings", x, y, w);
         // how to read the curves, so that a relay's thin operating line is not taken for another device
         g.setFont(Palette.font(Font.PLAIN, 6.5f));
@@ -230,93 +251,84 @@ public final class CoordinationSheet {
             "Thick line: clearing time (a relay's with its breaker). Thin line: a relay's operating time.",
             "Band: a fuse from melting to clearing, a breaker's tolerance, a relay's operating spread.",
             "Cable: solid from 0.1 s to 5 s (the adiabatic window), dashed outside it; grey: damage zone.",
-            "Diamond: minimum margin of a cable check. Cross: a crossing of the curves.",
+            "Diamond: least margin of a cable check. Cross: a crossing of the curves.",
         };
         for (String k : key) {
             text(g, fit(g, k, w), x, cy + 7);
             cy += 8;
         }
         cy += 3;
-        g.setFont(Palette.font(Font.PLAIN, 7f));
+        List<Block> blocks = new ArrayList<>();
+        int lineCount = 0;
         int index = 0;
-        int shown = 0;
         for (Study.StudyDevice d : study.devices()) {
             List<String> lines = new ArrayList<>();
             lines.add(d.id() + " (" + d.device().kind().key() + ")");
             lines.addAll(SettingsText.lines(d));
-            if (cy + 9 * lines.size() > bottom) {
-                break;
-            }
-            g.setColor(Palette.device(index));
-            g.setStroke(Palette.deviceStroke(index, 1.6f));
-            g.draw(new Line2D.Double(x, cy + 5, x + 14, cy + 5));
-            g.setColor(Color.BLACK);
-            g.setFont(Palette.font(Font.BOLD, 7f));
-            text(g, fit(g, lines.get(0), w - 18), x + 18, cy + 7.5);
-            g.setFont(Palette.font(Font.PLAIN, 7f));
-            cy += 9;
-            for (int i = 1; i < lines.size(); i++) {
-                text(g, fit(g, lines.get(i), w - 18), x + 18, cy + 7.5);
-                cy += 9;
-            }
-            cy += 2;
-            index++;
-            shown++;
+            blocks.add(new Block(lines, index++, false));
+            lineCount += lines.size();
         }
-        if (shown < study.devices().size()) {
-            text(g, "+ " + (study.devices().size() - shown) + " more in the report", x + 18, cy + 7.5);
-            cy += 9;
-        }
-        return cy;
-    }
-
-    /** Height of the cables table: a heading, then up to five lines and a gap per cable. */
-    private double cablesHeight() {
-        double h = 14;
-        for (Study.StudyCable c : study.cables()) {
-            h += 9 * (c.fault().isPresent() ? 5 : 4) + 2;
-        }
-        return Math.min(h, 14 + 3 * 47);
-    }
-
-    private void cablesTable(Graphics2D g, double x, double y, double w, double bottom) {
-        double cy = heading(g, "Cables", x, y, w);
-        g.setFont(Palette.font(Font.PLAIN, 7f));
-        int shown = 0;
-        for (Study.StudyCable c : study.cables()) {
-            CableThermalLimit l = c.limit();
-            String[] lines = {
-                l.id(),
-                l.material().key() + ", " + l.insulation().key() + ", " + (l.parallel() > 1 ? l.parallel() + " x " : "")
-                    + c.sizeText() + ", " + l.method().key(),
-                "k " + Quantities.significant(l.k(), 3) + ", " + initial(c) + " to "
-                    + Quantities.asGiven(l.finalCelsius()) + " °C" + (c.finalSource()
-                    == Study.TemperatureSource.INSULATION_DEFAULT ? " (default)" : "") + ", I²t "
-                    + engineering(l.i2tA2s()) + "A²s",
-                "withstand " + kiloamps(l.withstandAmps(0.1)) + " / " + kiloamps(l.withstandAmps(1.0)) + " / "
-                    + kiloamps(l.withstandAmps(5.0)) + " kA at 0.1 / 1 / 5 s",
-                c.fault().map(f -> "fault range " + kiloamps(f.fromAmps()) + " to " + kiloamps(f.toAmps()) + " kA")
-                    .orElse(""),
-            };
-            if (cy + 9 * lines.length > bottom) {
-                break;
+        if (!study.cables().isEmpty()) {
+            blocks.add(new Block(List.of("Cables"), -1, true));
+            lineCount += 2;
+            for (Study.StudyCable c : study.cables()) {
+                blocks.add(new Block(cableLines(c), -1, false));
+                lineCount += 5;
             }
-            g.setColor(Color.BLACK);
-            g.setFont(Palette.font(Font.BOLD, 7f));
-            text(g, fit(g, lines[0], w), x, cy + 7.5);
-            g.setFont(Palette.font(Font.PLAIN, 7f));
-            cy += 9;
-            for (int i = 1; i < lines.length; i++) {
-                if (!lines[i].isEmpty()) {
-                    text(g, fit(g, lines[i], w - 8), x + 8, cy + 7.5);
-                    cy += 9;
+        }
+        boolean two = cy + 9 * lineCount + 2 * blocks.size() > bottom;
+        double line = two ? 7.6 : 9;
+        float size = two ? 6.3f : 7f;
+        double colW = two ? (w - 8) / 2 : w;
+        double top = cy;
+        double colX = x;
+        int column = 0;
+        int shownDevices = 0;
+        int shownCables = 0;
+        for (Block b : blocks) {
+            double need = b.heading() ? line + 6 : line * b.lines().size() + 2;
+            if (cy + need > bottom) {
+                if (!two || column == 1) {
+                    break;
                 }
+                column = 1;
+                colX = x + colW + 8;
+                cy = top;
+            }
+            if (b.heading()) {
+                cy = heading(g, b.lines().get(0), colX, cy + 4, colW) - 2;
+                continue;
+            }
+            boolean isDevice = b.device() >= 0;
+            double indent = isDevice ? 16 : 0;
+            if (isDevice) {
+                g.setColor(Palette.device(b.device()));
+                g.setStroke(Palette.deviceStroke(b.device(), 1.6f));
+                g.draw(new Line2D.Double(colX, cy + line / 2 + 0.5, colX + 12, cy + line / 2 + 0.5));
+            }
+            g.setColor(Color.BLACK);
+            g.setFont(Palette.font(Font.BOLD, size));
+            text(g, fit(g, b.lines().get(0), colW - indent), colX + indent, cy + line - 1.5);
+            g.setFont(Palette.font(Font.PLAIN, size));
+            cy += line;
+            double sub = isDevice ? indent : 8;
+            for (int i = 1; i < b.lines().size(); i++) {
+                text(g, fit(g, b.lines().get(i), colW - sub), colX + sub, cy + line - 1.5);
+                cy += line;
             }
             cy += 2;
-            shown++;
+            if (isDevice) {
+                shownDevices++;
+            } else {
+                shownCables++;
+            }
         }
-        if (shown < study.cables().size()) {
-            text(g, "+ " + (study.cables().size() - shown) + " more in the report", x + 8, cy + 7.5);
+        int missing = study.devices().size() - shownDevices + study.cables().size() - shownCables;
+        if (missing > 0) {
+            g.setColor(Color.BLACK);
+            g.setFont(Palette.font(Font.PLAIN, size));
+            text(g, "+ " + missing + " more devices or cables in the report", colX, Math.min(cy, bottom - 2) + line
+                    - 1.5);
         }
     }
 
@@ -402,7 +414,10 @@ public final class CoordinationSheet {
         throw new IllegalStateException("no table row for a result of kind " + o.getClass().getSimpleName());
     }
 
-    /** Every assumption and warning of the report, each once, assumptions first. */
+    /**
+     * Every assumption and warning of the report, each once, assumptions first; notes that say the
+     * same of several devices or cables are said once, naming them all.
+     */
     private List<String> notes() {
         java.util.LinkedHashSet<String> out = new java.util.LinkedHashSet<>();
         for (StudyReport.CheckNotes n : report.notes()) {
@@ -412,7 +427,32 @@ public final class CoordinationSheet {
             n.warnings().forEach(w -> out.add("warning: " + w.message()));
         }
         report.warnings().forEach(w -> out.add("warning: " + w.message()));
-        return new ArrayList<>(out);
+        java.util.LinkedHashMap<String, List<String>> subjects = new java.util.LinkedHashMap<>();
+        List<String> merged = new ArrayList<>();
+        java.util.regex.Pattern subject = java.util.regex.Pattern.compile("^(assumed|warning): (\\w+) '([^']+)': (.*)$");
+        for (String n : out) {
+            java.util.regex.Matcher m = subject.matcher(n);
+            if (m.matches()) {
+                String key = m.group(1) + "\u0000" + m.group(2) + "\u0000" + m.group(4);
+                if (!subjects.containsKey(key)) {
+                    merged.add(key);
+                }
+                subjects.computeIfAbsent(key, k -> new ArrayList<>()).add("'" + m.group(3) + "'");
+            } else {
+                merged.add(n);
+            }
+        }
+        List<String> result = new ArrayList<>();
+        for (String n : merged) {
+            List<String> who = subjects.get(n);
+            if (who == null) {
+                result.add(n);
+            } else {
+                String[] p = n.split("\u0000", 3);
+                result.add(p[0] + ": " + p[1] + (who.size() > 1 ? "s " : " ") + String.join(", ", who) + ": " + p[2]);
+            }
+        }
+        return result;
     }
 
     /** The notes wrapped to the page width, with the lines that do not fit counted in a last line. */

@@ -102,15 +102,59 @@ class SheetRenderTest {
         r.notes().forEach(n -> n.assumptions().forEach(a -> expected.add(a.message())));
         r.notes().forEach(n -> n.warnings().forEach(w -> expected.add(w.message())));
         r.warnings().forEach(w -> expected.add(w.message()));
+        java.util.regex.Pattern subject = java.util.regex.Pattern.compile("^\\w+ '([^']+)': (.*)$");
         for (String m : expected) {
-            // wrapped lines are separate text elements, so compare without white space
-            assertThat(text, containsString(m.replaceAll("\\s+", "")));
+            // wrapped lines are separate text elements, so compare without white space; a note said of
+            // several devices names them all before what it says
+            java.util.regex.Matcher about = subject.matcher(m);
+            if (about.matches()) {
+                assertThat(text, containsString("'" + about.group(1) + "'"));
+                assertThat(text, containsString(about.group(2).replaceAll("\\s+", "")));
+            } else {
+                assertThat(text, containsString(m.replaceAll("\\s+", "")));
+            }
         }
         for (var o : r.results()) {
             if (!o.pass()) {
                 assertThat(text, containsString(("why: " + o.reason()).replaceAll("\\s+", "")));
             }
         }
+    }
+
+    /** The PDF's text is text: every device id, every verdict and the caution can be found in it. */
+    @ParameterizedTest
+    @MethodSource("samples")
+    void pdfTextHoldsDevicesVerdictsAndCaution(Path file) throws Exception {
+        Study s = StudyReader.read(file);
+        StudyReport r = StudyReport.evaluate(s);
+        byte[] pdf = new CoordinationSheet(s, r).render(OutputFormat.PDF, 150);
+        String text;
+        try (org.apache.pdfbox.pdmodel.PDDocument doc = org.apache.pdfbox.Loader.loadPDF(pdf)) {
+            text = new org.apache.pdfbox.text.PDFTextStripper().getText(doc).replaceAll("\\s+", " ");
+            assertThat(doc.getDocumentInformation().getTitle(), is(s.title()));
+        }
+        for (Study.StudyDevice d : s.devices()) {
+            assertThat(text, containsString(d.id()));
+        }
+        for (var o : r.results()) {
+            assertThat(text, containsString(o.pass() ? "pass" : "FAIL"));
+        }
+        assertThat(text, containsString(CoordinationSheet.CAUTION.substring(0, 60)));
+        assertThat(text, containsString("Current at"));
+    }
+
+    /** The SVG scales (viewBox) and its tick labels are text elements. */
+    @ParameterizedTest
+    @MethodSource("samples")
+    void svgScalesAndKeepsItsTickLabelsAsText(Path file) throws Exception {
+        Study s = StudyReader.read(file);
+        CoordinationSheet sheet = new CoordinationSheet(s, StudyReport.evaluate(s));
+        String svg = new String(sheet.render(OutputFormat.SVG, 150), java.nio.charset.StandardCharsets.UTF_8);
+        assertThat(svg, containsString("viewBox='0 0 " + (long) sheet.widthPoints() + " " + (long) sheet.heightPoints()
+                + "'"));
+        assertThat(svg, containsString(">1 kA</text>"));
+        assertThat(svg, containsString(">Time (s)</text>"));
+        assertThat(svg, containsString("@font-face"));
     }
 
     @org.junit.jupiter.api.Test
