@@ -263,7 +263,7 @@ public final class CoordinationSheet {
         int index = 0;
         for (Study.StudyDevice d : study.devices()) {
             List<String> lines = new ArrayList<>();
-            lines.add(d.id() + " (" + d.device().kind().key() + ")");
+            lines.add(SettingsText.heading(d));
             lines.addAll(SettingsText.lines(d));
             blocks.add(new Block(lines, index++, false));
             lineCount += lines.size();

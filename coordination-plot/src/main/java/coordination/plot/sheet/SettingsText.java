@@ -21,6 +21,18 @@ final class SettingsText {
     }
 
     /**
+     * The heading line of a device: its id and kind, and a relay's breaker interrupting time.
+     *
+     * @param d the device of the study
+     * @return the line
+     */
+    static String heading(Study.StudyDevice d) {
+        String breaker = d.device() instanceof Relay r && r.breakerSeconds() > 0
+                ? ", breaker " + g(r.breakerSeconds()) + " s" : "";
+        return d.id() + " (" + d.device().kind().key() + breaker + ")";
+    }
+
+    /**
      * Describes a device.
      *
      * @param d the device of the study
@@ -81,9 +93,6 @@ final class SettingsText {
         }
         relay.currentTransformer().ifPresent(ct -> lines.add("CT " + g(ct.primaryAmps()) + "/" + g(ct.secondaryAmps())
                 + " A, settings in secondary A"));
-        if (relay.breakerSeconds() > 0) {
-            lines.add("breaker interrupting time " + g(relay.breakerSeconds()) + " s");
-        }
     }
 
     private static String energy(LetThroughEnergy e) {
