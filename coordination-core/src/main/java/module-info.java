@@ -17,5 +17,6 @@ module coordination.core {
     exports coordination.core.design;
     exports coordination.core.margin;
     exports coordination.core.matchers;
+    exports coordination.core.network;
     exports coordination.core.study;
 }
