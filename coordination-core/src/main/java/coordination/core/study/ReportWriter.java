@@ -95,7 +95,7 @@ public final class ReportWriter {
      */
     public static String write(CheckResult result) {
         JsonOut j = new JsonOut();
-        check(j, result, new StudyReport.CheckNotes(List.of(), List.of()));
+        check(j, result, new StudyReport.CheckNotes(List.of(), List.of()), null);
         return j.finish();
     }
 
@@ -166,6 +166,32 @@ public final class ReportWriter {
         return j.endArray().endObject().finish();
     }
 
+    /**
+     * The fault levels of a study's network: {@code {"format", "study", "faults"}}.
+     *
+     * @param study a study with a network
+     * @return the JSON text
+     */
+    public static String writeFaults(Study study) {
+        JsonOut j = new JsonOut().startObject();
+        j.integer("format", StudyReport.FORMAT).text("study", study.name()).text("title", study.title());
+        faults(j, study);
+        return j.endObject().finish();
+    }
+
+    private static void faults(JsonOut j, Study study) {
+        j.startArray("faults");
+        study.network().ifPresent(n -> {
+            for (coordination.core.network.FaultLevel f : n.levels().levels()) {
+                j.startObject().text("at", f.at()).text("bus", f.bus()).number("ik3_max_ka", f.ik3MaxAmps() / 1000)
+                        .number("ik3_min_ka", f.ik3MinAmps() / 1000).number("ik2_min_ka", f.ik2MinAmps() / 1000)
+                        .number("kappa", f.kappa()).number("ip_ka", f.ipAmps() / 1000).number("r_x", f.rOverX())
+                        .endObject();
+            }
+        });
+        j.endArray();
+    }
+
     // --------------------------------------------------------------------------------------- report
 
     private static void report(JsonOut j, StudyReport report, Sensitivity run) {
@@ -177,7 +203,7 @@ public final class ReportWriter {
                 .bool("pass", report.pass());
         j.startArray("checks");
         for (int i = 0; i < report.results().size(); i++) {
-            check(j, report.results().get(i), report.notes().get(i));
+            check(j, report.results().get(i), report.notes().get(i), study.checks().get(i));
         }
         j.endArray().startArray("cables");
         for (Study.StudyCable c : study.cables()) {
@@ -189,6 +215,15 @@ public final class ReportWriter {
         }
         j.endArray();
         notes(j, "warnings", report.warnings());
+        faults(j, study);
+        j.startArray("accepted");
+        study.network().ifPresent(n -> {
+            for (Study.Accepted a : n.accepted()) {
+                j.startObject().text("upstream", a.upstream()).text("downstream", a.downstream())
+                        .text("reason", a.reason()).endObject();
+            }
+        });
+        j.endArray();
         if (run != null) {
             j.startObject("sensitivity").number("min_factor", run.minFactor()).number("max_factor", run.maxFactor())
                     .startArray("flips");
@@ -201,11 +236,15 @@ public final class ReportWriter {
         j.endObject();
     }
 
-    private static void check(JsonOut j, CheckResult result, StudyReport.CheckNotes notes) {
+    private static void check(JsonOut j, CheckResult result, StudyReport.CheckNotes notes, Study.StudyCheck spec) {
         if (result instanceof CableCheckResult c) {
             cableCheck(j, c);
+            j.bool("derived", spec instanceof Study.CableCheckSpec cc && cc.derived());
         } else if (result instanceof GradingCheckResult g) {
             gradingCheck(j, g);
+            Study.GradingCheckSpec gs = spec instanceof Study.GradingCheckSpec x ? x : null;
+            j.bool("derived", gs != null && gs.derived())
+                    .text("fault_case", gs == null || gs.faultCase().isEmpty() ? null : gs.faultCase());
         }
         notes(j, "assumptions", notes.assumptions());
         notes(j, "warnings", notes.warnings());

@@ -26,10 +26,11 @@ import java.util.OptionalDouble;
  * @param devices the devices
  * @param checks the checks
  * @param signOff the drawing number and the names of who prepared, checked and approved the study
+ * @param network the network and its fault levels, if the study describes one
  */
 public record Study(String name, String title, double voltageKv, double frequencyHz, String revision, String date,
         PageSize page, List<StudyCable> cables, List<StudyDevice> devices, List<StudyCheck> checks,
-        SignOff signOff) {
+        SignOff signOff, Optional<StudyNetwork> network) {
 
     /**
      * The sheet's sign-off block, each field empty where the study leaves it out (the sheet then
@@ -53,9 +54,56 @@ public record Study(String name, String title, double voltageKv, double frequenc
         }
     }
 
+    /** Where a device sits on its branch. */
+    public enum End {
+        /** A cable's sending end ({@code from}) or a transformer's HV terminals ({@code hv}). */
+        FROM,
+        /** A cable's receiving end ({@code to}) or a transformer's LV terminals ({@code lv}). */
+        TO
+    }
+
+    /**
+     * A device's place in the network.
+     *
+     * @param branch the cable or transformer it sits at
+     * @param end which end
+     */
+    public record Placement(String branch, End end) {
+    }
+
+    /**
+     * A derived pair the study declares as not meant to grade.
+     *
+     * @param upstream the upstream device
+     * @param downstream the downstream device
+     * @param reason why
+     */
+    public record Accepted(String upstream, String downstream, String reason) {
+    }
+
+    /**
+     * The network of a study.
+     *
+     * @param network the buses, sources, transformers and cable branches
+     * @param levels their fault levels
+     * @param placements each placed device's branch and end, by device id
+     * @param accepted derived pairs declared as not meant to grade
+     * @param warnings what the derivation could not do (a cable without a protecting device, ...)
+     */
+    public record StudyNetwork(coordination.core.network.Network network, coordination.core.network.FaultLevels levels,
+            java.util.Map<String, Placement> placements, List<Accepted> accepted, List<Note> warnings) {
+        /** Copies the collections in. */
+        public StudyNetwork {
+            placements = java.util.Collections.unmodifiableMap(new java.util.LinkedHashMap<>(placements));
+            accepted = List.copyOf(accepted);
+            warnings = List.copyOf(warnings);
+        }
+    }
+
     /** Copies the lists in. */
     public Study {
         Checks.given("study: sign-off", signOff);
+        Checks.given("study: network", network);
         cables = List.copyOf(cables);
         devices = List.copyOf(devices);
         checks = List.copyOf(checks);
@@ -77,10 +125,10 @@ public record Study(String name, String title, double voltageKv, double frequenc
         for (StudyCheck c : checks) {
             if (c instanceof CableCheckSpec cc) {
                 scaled.add(new CableCheckSpec(cc.cable(), cc.device(), cc.requirement(),
-                        cc.range().scaled(minFactor, maxFactor), cc.dcOffset(), cc.dcSource()));
+                        cc.range().scaled(minFactor, maxFactor), cc.dcOffset(), cc.dcSource(), cc.derived()));
             } else if (c instanceof GradingCheckSpec g) {
                 scaled.add(new GradingCheckSpec(g.upstream(), g.downstream(), g.requirement(),
-                        g.range().scaled(minFactor, maxFactor)));
+                        g.range().scaled(minFactor, maxFactor), g.derived(), g.faultCase(), g.upstreamScale()));
             }
         }
         List<StudyCable> cs = new java.util.ArrayList<>();
@@ -88,7 +136,8 @@ public record Study(String name, String title, double voltageKv, double frequenc
             cs.add(new StudyCable(c.limit(), c.sizeText(), c.fault().map(r -> r.scaled(minFactor, maxFactor)),
                     c.initialSource(), c.finalSource()));
         }
-        return new Study(name, title, voltageKv, frequencyHz, revision, date, page, cs, devices, scaled, signOff);
+        return new Study(name, title, voltageKv, frequencyHz, revision, date, page, cs, devices, scaled, signOff,
+                network);
     }
 
     /** Sheet page sizes. */
@@ -242,6 +291,8 @@ public record Study(String name, String title, double voltageKv, double frequenc
         FROM_X_R,
         /** Neither stated: κ {@value DcOffset#ASSUMED_KAPPA} assumed. */
         ASSUMED_KAPPA,
+        /** κ from the network's R/X at the cable's sending end (IEC 60909-0, eq. 55). */
+        FROM_NETWORK,
         /** Switched off by the study. */
         NONE
     }
@@ -255,9 +306,24 @@ public record Study(String name, String title, double voltageKv, double frequenc
      * @param range the fault currents checked
      * @param dcOffset DC-offset heating, unless switched off
      * @param dcSource where the heating's κ came from
+     * @param derived whether the network implied the check (rather than the study's checks list)
      */
     public record CableCheckSpec(String cable, String device, MarginRequirement requirement, CurrentRange range,
-            Optional<DcOffset> dcOffset, DcSource dcSource) implements StudyCheck {
+            Optional<DcOffset> dcOffset, DcSource dcSource, boolean derived) implements StudyCheck {
+        /**
+         * A check written in the study.
+         *
+         * @param cable cable id
+         * @param device device id
+         * @param requirement the margin
+         * @param range the fault currents
+         * @param dcOffset DC-offset heating
+         * @param dcSource where its κ came from
+         */
+        public CableCheckSpec(String cable, String device, MarginRequirement requirement, CurrentRange range,
+                Optional<DcOffset> dcOffset, DcSource dcSource) {
+            this(cable, device, requirement, range, dcOffset, dcSource, false);
+        }
     }
 
     /**
@@ -266,10 +332,27 @@ public record Study(String name, String title, double voltageKv, double frequenc
      * @param upstream upstream device id
      * @param downstream downstream device id
      * @param requirement what is asked
-     * @param range the currents both devices see
+     * @param range the currents both devices see, as the downstream device sees them
+     * @param derived whether the network implied the check
+     * @param faultCase empty, or for a pair across a delta-star transformer {@code three-phase} or
+     *     {@code phase-to-phase}
+     * @param upstreamScale factor of the upstream device's current over the downstream device's: 2/√3
+     *     for an LV phase-to-phase fault seen through a delta-star transformer, else 1
      */
     public record GradingCheckSpec(String upstream, String downstream, GradingRequirement requirement,
-            CurrentRange range) implements StudyCheck {
+            CurrentRange range, boolean derived, String faultCase, double upstreamScale) implements StudyCheck {
+        /**
+         * A check written in the study.
+         *
+         * @param upstream upstream device id
+         * @param downstream downstream device id
+         * @param requirement what is asked
+         * @param range the currents
+         */
+        public GradingCheckSpec(String upstream, String downstream, GradingRequirement requirement,
+                CurrentRange range) {
+            this(upstream, downstream, requirement, range, false, "", 1.0);
+        }
     }
 
     /**

@@ -146,6 +146,9 @@ public final class StudyReader {
     private OptionalDouble studyKv = OptionalDouble.empty();
     /** The design limits of the relay just read; none for other devices. */
     private Study.DesignLimits designLimits = Study.DesignLimits.NONE;
+    private NetworkSection network;
+    private Map<String, Study.CableCheckSpec> derivedCables = Map.of();
+    private Map<Derivation.Pair, List<Study.GradingCheckSpec>> derivedPairs = Map.of();
     private OptionalDouble frequency = OptionalDouble.empty();
 
     private StudyReader(String file) {
@@ -273,7 +276,7 @@ public final class StudyReader {
         }
         Node.MapNode root = mapped.get();
         b.allowOnly(root, "", "format", "title", "voltage_kv", "frequency_hz", "revision", "date", "page", "cables",
-                "devices", "checks", "sign_off");
+                "devices", "checks", "sign_off", "network");
         if (!b.has(root, "format")) {
             b.missing(root, "", "format", "write 'format: 1'");
         } else {
@@ -293,23 +296,110 @@ public final class StudyReader {
         Optional<Study.PageSize> page = b.choice(root, "", "page", PAGES, Study.PageSize.A4);
         Study.SignOff signOff = signOff(root);
 
+        network = new NetworkSection(b, root);
         Map<String, Study.StudyCable> cables = items(root, "cables", "cable", this::cable, Study.StudyCable::id);
         Map<String, Study.StudyDevice> devices = items(root, "devices", "device", this::device, Study.StudyDevice::id);
-        List<Study.StudyCheck> checks = new ArrayList<>();
+        Optional<Study.StudyNetwork> net = problems.isEmpty() ? network.build() : Optional.empty();
+        Map<String, Study.CableCheckSpec> derivedCables = new LinkedHashMap<>();
+        Map<Derivation.Pair, List<Study.GradingCheckSpec>> derivedPairs = new LinkedHashMap<>();
+        List<Note> networkWarnings = new ArrayList<>();
+        if (net.isPresent() && studyKv.isPresent() && frequency.isPresent()) {
+            Derivation d = new Derivation(net.get(), devices, cables, studyKv.getAsDouble(), frequency.getAsDouble(),
+                    network);
+            derivedCables = d.cableChecks();
+            derivedPairs = d.gradingChecks();
+            networkWarnings.addAll(net.get().warnings());
+            networkWarnings.addAll(d.warnings());
+            // a cable without a stated fault range takes its derived one, for the chart and the design aids
+            for (Study.CableCheckSpec c : derivedCables.values()) {
+                Study.StudyCable cable = cables.get(c.cable());
+                if (cable.fault().isEmpty()) {
+                    cables.put(c.cable(), new Study.StudyCable(cable.limit(), cable.sizeText(), Optional.of(c.range()),
+                            cable.initialSource(), cable.finalSource()));
+                }
+            }
+        }
+        this.derivedCables = derivedCables;
+        this.derivedPairs = derivedPairs;
+        List<Study.StudyCheck> explicit = new ArrayList<>();
+        List<Study.Accepted> accepted = new ArrayList<>();
         List<Node> checkNodes = limited(b.optionalList(root, "", "checks"), root, "checks");
         for (int i = 0; i < checkNodes.size(); i++) {
             try {
-                check(checkNodes.get(i), "checks[" + i + "]", cables, devices).ifPresent(checks::add);
+                Node n = checkNodes.get(i);
+                if (n instanceof Node.MapNode m && b.has(m, "accept")) {
+                    accept(m, "checks[" + i + "]", devices).ifPresent(accepted::add);
+                } else {
+                    explicit.addAll(check(n, "checks[" + i + "]", cables, devices));
+                }
             } catch (IllegalArgumentException e) {
                 b.problem(checkNodes.get(i), "checks[" + i + "]", e.getMessage());
             }
         }
+        List<Study.StudyCheck> checks = merge(explicit, accepted);
         if (!problems.isEmpty() || title.isEmpty()) {
             return Optional.empty();
         }
+        Optional<Study.StudyNetwork> withAccepted = net.map(x -> new Study.StudyNetwork(x.network(), x.levels(),
+                x.placements(), accepted, networkWarnings));
         return Optional.of(new Study(name, title.get(), studyKv.getAsDouble(), frequency.getAsDouble(), revision.orElse(""),
                 date.orElse(""), page.orElseThrow(), List.copyOf(cables.values()), List.copyOf(devices.values()),
-                checks, signOff));
+                checks, signOff, withAccepted));
+    }
+
+    /**
+     * The checks to run: the derived ones, less those the study accepts or writes itself, then the
+     * study's own in its order.
+     */
+    private List<Study.StudyCheck> merge(List<Study.StudyCheck> explicit, List<Study.Accepted> accepted) {
+        List<Study.StudyCheck> out = new ArrayList<>();
+        java.util.Set<String> written = new java.util.HashSet<>();
+        for (Study.StudyCheck c : explicit) {
+            if (c instanceof Study.CableCheckSpec cc) {
+                written.add("cable:" + cc.cable() + ":" + cc.device());
+            } else if (c instanceof Study.GradingCheckSpec g) {
+                written.add("pair:" + g.upstream() + ":" + g.downstream());
+            }
+        }
+        for (Study.CableCheckSpec c : derivedCables.values()) {
+            if (!written.contains("cable:" + c.cable() + ":" + c.device())) {
+                out.add(c);
+            }
+        }
+        for (Map.Entry<Derivation.Pair, List<Study.GradingCheckSpec>> e : derivedPairs.entrySet()) {
+            String key = "pair:" + e.getKey().upstream() + ":" + e.getKey().downstream();
+            boolean isAccepted = accepted.stream().anyMatch(a -> a.upstream().equals(e.getKey().upstream())
+                    && a.downstream().equals(e.getKey().downstream()));
+            if (!written.contains(key) && !isAccepted) {
+                out.addAll(e.getValue());
+            }
+        }
+        out.addAll(explicit);
+        return out;
+    }
+
+    /** {@code accept: {upstream, downstream, reason}}: a derived pair not meant to grade. */
+    private Optional<Study.Accepted> accept(Node.MapNode m, String path, Map<String, Study.StudyDevice> devices) {
+        b.allowOnly(m, path, "accept");
+        String p = path + ".accept";
+        Optional<Node.MapNode> a = b.map(b.value(m, "accept"), p);
+        if (a.isEmpty()) {
+            return Optional.empty();
+        }
+        b.allowOnly(a.get(), p, "upstream", "downstream", "reason");
+        Optional<String> up = reference(a.get(), p, "upstream", devices.keySet(), "device");
+        Optional<String> down = reference(a.get(), p, "downstream", devices.keySet(), "device");
+        Optional<String> reason = b.text(a.get(), p, "reason", "why the pair is not meant to grade");
+        if (up.isEmpty() || down.isEmpty() || reason.isEmpty()) {
+            return Optional.empty();
+        }
+        if (!derivedPairs.containsKey(new Derivation.Pair(up.get(), down.get()))) {
+            b.problem(a.get(), p, "'" + up.get() + "' over '" + down.get() + "' is not a pair the network derives"
+                    + (network.present() ? "" : " (the study has no network section)") + " - only derived pairs can"
+                    + " be accepted");
+            return Optional.empty();
+        }
+        return Optional.of(new Study.Accepted(up.get(), down.get(), reason.get()));
     }
 
     /** The optional sign-off block: short texts, so that the title block shows them whole. */
@@ -398,7 +488,8 @@ public final class StudyReader {
         Node.MapNode m = mapped.get();
         int before = b.problemCount();
         b.allowOnly(m, path, "id", "conductor", "insulation", "size_mm2", "size", "parallel", "initial_c", "final_c",
-                "load", "method", "fault_ka", "voltage_kv");
+                "load", "method", "fault_ka", "voltage_kv", "from", "to", "length_m", "r_ohm_per_km", "x_ohm_per_km",
+                "end_temperature_c");
         Optional<String> id = b.id(m, path, "every cable needs an id");
         Optional<ConductorMaterial> conductor = b.choice(m, path, "conductor", CONDUCTORS);
         Optional<Insulation> insulation = b.choice(m, path, "insulation", INSULATIONS);
@@ -491,6 +582,7 @@ public final class StudyReader {
         try {
             CableThermalLimit limit = new CableThermalLimit(id.get(), conductor.get(), ins, mm2, parallel.getAsInt(),
                     initial.getAsDouble(), fin.getAsDouble(), tm);
+            network.cable(m, path, limit);
             return Optional.of(new Study.StudyCable(limit, sizeText,
                     fault.map(f -> new Study.CurrentRange(f[0], f[1])), initialSource, finalSource));
         } catch (IllegalArgumentException e) {
@@ -552,6 +644,7 @@ public final class StudyReader {
         if (device.isEmpty() || id.isEmpty() || kv.isEmpty() || b.problemCount() > before) {
             return Optional.empty();
         }
+        network.device(m, path, id.get());
         double factor = studyKv.isEmpty() ? 1.0 : kv.getAsDouble() / studyKv.getAsDouble();
         return Optional.of(new Study.StudyDevice(device.get(), kv.getAsDouble(), factor,
                 device.get().referredBy(factor), notes, designLimits));
@@ -559,7 +652,7 @@ public final class StudyReader {
 
     private Optional<ProtectiveDevice> relay(Node.MapNode m, String path, String id, List<Note> notes) {
         b.allowOnly(m, path, "id", "type", "voltage_kv", "breaker_s", "ct", "stages", "tolerance", "load_a", "no_trip",
-                "sensitivity_factor");
+                "sensitivity_factor", "branch", "end");
         int before = b.problemCount();
         OptionalDouble breaker = b.number(m, path, BREAKER_TIME);
         Optional<CurrentTransformer> ct = Optional.empty();
@@ -805,7 +898,7 @@ public final class StudyReader {
 
     private Optional<ProtectiveDevice> fuse(Node.MapNode m, String path, String id, List<Note> notes) {
         b.allowOnly(m, path, "id", "type", "voltage_kv", "rating_a", "melting", "clearing", "clearing_i2t_a2s",
-                "clearing_i2t", "pre_arcing_i2t_a2s", "pre_arcing_i2t", "category", "series");
+                "clearing_i2t", "pre_arcing_i2t_a2s", "pre_arcing_i2t", "category", "series", "branch", "end");
         int before = b.problemCount();
         OptionalDouble rating = b.number(m, path, FUSE_RATING);
         Optional<LetThroughEnergy> letThrough = energy(m, path, "clearing_i2t_a2s", "clearing_i2t");
@@ -878,7 +971,8 @@ public final class StudyReader {
 
     private Optional<ProtectiveDevice> breaker(Node.MapNode m, String path, String id, List<Note> notes) {
         b.allowOnly(m, path, "id", "type", "voltage_kv", "ir_a", "tr_s", "isd_a", "tsd_s", "tsd_i2t", "ii_a",
-                "pickup_tolerance", "time_tolerance", "long_time_band", "instantaneous_s");
+                "pickup_tolerance", "time_tolerance", "long_time_band", "instantaneous_s", "branch",
+                "end");
         int before = b.problemCount();
         OptionalDouble ir = b.number(m, path, IR);
         OptionalDouble tr = b.number(m, path, TR);
@@ -940,7 +1034,7 @@ public final class StudyReader {
 
     private Optional<ProtectiveDevice> mcb(Node.MapNode m, String path, String id, List<Note> notes) {
         b.allowOnly(m, path, "id", "type", "voltage_kv", "curve_type", "rating_a", "fastest_s", "let_through_i2t_a2s",
-                "let_through_i2t");
+                "let_through_i2t", "branch", "end");
         int before = b.problemCount();
         Optional<McbType> t = b.choice(m, path, "curve_type", MCB_TYPES);
         OptionalDouble rating = b.number(m, path, MCB_RATING);
@@ -963,22 +1057,22 @@ public final class StudyReader {
 
     // ---------------------------------------------------------------------------------------- checks
 
-    private Optional<Study.StudyCheck> check(Node n, String path, Map<String, Study.StudyCable> cables,
+    private List<Study.StudyCheck> check(Node n, String path, Map<String, Study.StudyCable> cables,
             Map<String, Study.StudyDevice> devices) {
         Optional<Node.MapNode> mapped = b.map(n, path);
         if (mapped.isEmpty()) {
-            return Optional.empty();
+            return List.of();
         }
         Node.MapNode m = mapped.get();
         if (b.has(m, "cable") || b.has(m, "device")) {
-            return cableCheck(m, path, cables, devices);
+            return cableCheck(m, path, cables, devices).map(List::of).orElse(List.of());
         }
         if (b.has(m, "upstream") || b.has(m, "downstream")) {
             return gradingCheck(m, path, devices);
         }
         b.problem(m, path, "a check names either cable and device (a cable check) or upstream and downstream"
-                + " (a grading check)");
-        return Optional.empty();
+                + " (a grading check)" + (network.present() ? ", or accept: {upstream, downstream, reason}" : ""));
+        return List.of();
     }
 
     private Optional<Study.StudyCheck> cableCheck(Node.MapNode m, String path, Map<String, Study.StudyCable> cables,
@@ -1042,6 +1136,12 @@ public final class StudyReader {
             return Optional.empty();
         }
         Optional<Study.CurrentRange> checked = range.map(r -> new Study.CurrentRange(r[0], r[1]));
+        Study.CableCheckSpec derived = derivedCables.get(cable.get());
+        if (derived != null && !b.has(m, "dc_offset")) {
+            // the network gives κ at the cable's sending end
+            dc = derived.dcOffset();
+            dcSource = derived.dcSource();
+        }
         if (checked.isEmpty()) {
             checked = cables.get(cable.get()).fault();
             if (checked.isEmpty()) {
@@ -1053,7 +1153,7 @@ public final class StudyReader {
         return Optional.of(new Study.CableCheckSpec(cable.get(), device.get(), req.get(), checked.get(), dc, dcSource));
     }
 
-    private Optional<Study.StudyCheck> gradingCheck(Node.MapNode m, String path, Map<String, Study.StudyDevice> devices) {
+    private List<Study.StudyCheck> gradingCheck(Node.MapNode m, String path, Map<String, Study.StudyDevice> devices) {
         b.allowOnly(m, path, "upstream", "downstream", "interval_s", "interval_to", "rating_ratio", "no_overlap",
                 "range_ka");
         if (b.has(m, "interval_to") && !b.has(m, "interval_s")) {
@@ -1088,16 +1188,27 @@ public final class StudyReader {
             req = optional(b.number(m, path, INTERVAL)).flatMap(v -> toClearing.map(c -> c
                     ? GradingRequirement.intervalBetweenClearingTimes(v) : GradingRequirement.intervalSeconds(v)));
         }
-        Optional<double[]> range = b.rangeKa(m, path, "range_ka", true);
+        List<Study.GradingCheckSpec> derived = up.isPresent() && down.isPresent()
+                ? derivedPairs.getOrDefault(new Derivation.Pair(up.get(), down.get()), List.of()) : List.of();
+        Optional<double[]> range = b.rangeKa(m, path, "range_ka", derived.isEmpty());
         if (up.isPresent() && up.equals(down)) {
             b.problem(b.value(m, "downstream"), path + ".downstream", "the same device as upstream, '" + up.get() + "'");
-            return Optional.empty();
+            return List.of();
         }
-        if (up.isEmpty() || down.isEmpty() || req.isEmpty() || range.isEmpty()) {
-            return Optional.empty();
+        if (up.isEmpty() || down.isEmpty() || req.isEmpty() || (range.isEmpty() && derived.isEmpty())) {
+            return List.of();
         }
-        return Optional.of(new Study.GradingCheckSpec(up.get(), down.get(), req.get(),
-                new Study.CurrentRange(range.get()[0], range.get()[1])));
+        if (range.isPresent()) {
+            return List.of(new Study.GradingCheckSpec(up.get(), down.get(), req.get(),
+                    new Study.CurrentRange(range.get()[0], range.get()[1])));
+        }
+        // the study's requirement over the ranges the network derives for the pair
+        List<Study.StudyCheck> out = new ArrayList<>();
+        for (Study.GradingCheckSpec g : derived) {
+            out.add(new Study.GradingCheckSpec(g.upstream(), g.downstream(), req.get(), g.range(), false, g.faultCase(),
+                    g.upstreamScale()));
+        }
+        return out;
     }
 
     private static Optional<Double> optional(OptionalDouble v) {

@@ -65,13 +65,15 @@ public record StudyReport(Study study, List<CheckResult> results, List<CheckNote
                         cc.range().fromAmps(), cc.range().toAmps(), cc.requirement(), cc.dcOffset().orElse(null))
                         .result());
             } else if (c instanceof Study.GradingCheckSpec g) {
-                results.add(GradingCheck.check(study.device(g.upstream()).referred(),
+                results.add(GradingCheck.check(study.device(g.upstream()).referred().referredBy(1 / g.upstreamScale()),
                         study.device(g.downstream()).referred(), g.range().fromAmps(), g.range().toAmps(),
                         g.requirement()));
             }
             notes.add(StudyNotes.of(study, c, results.get(results.size() - 1)));
         }
-        return new StudyReport(study, results, notes, rideThrough(study));
+        List<Note> warnings = new ArrayList<>(rideThrough(study));
+        study.network().ifPresent(n -> warnings.addAll(n.warnings()));
+        return new StudyReport(study, results, notes, warnings);
     }
 
     /** A device that trips on a current the study says it must ride through does its job badly. */

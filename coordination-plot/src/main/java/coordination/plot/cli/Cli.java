@@ -10,7 +10,8 @@ import picocli.CommandLine.Command;
 @Command(name = "coordination", mixinStandardHelpOptions = true, versionProvider = Cli.Version.class,
         description = "Checks that protective devices protect their cables and grade with each other,"
                 + " and draws coordination sheets.",
-        subcommands = {SheetCommand.class, CheckCommand.class, WithstandCommand.class, DesignCommand.class},
+        subcommands = {SheetCommand.class, CheckCommand.class, WithstandCommand.class, DesignCommand.class,
+            FaultsCommand.class},
         exitCodeOnInvalidInput = ExitCodes.BAD_INPUT, exitCodeOnExecutionException = ExitCodes.INTERNAL_ERROR)
 public final class Cli implements Runnable {
     private final PrintStream out;
@@ -89,6 +90,9 @@ public final class Cli implements Runnable {
             }
             if (cls == DesignCommand.class) {
                 return cls.cast(new DesignCommand(out, err));
+            }
+            if (cls == FaultsCommand.class) {
+                return cls.cast(new FaultsCommand(out, err));
             }
             return CommandLine.defaultFactory().create(cls);
         }

@@ -1,0 +1,250 @@
+package coordination.core.study;
+
+import coordination.core.curve.DeviceKind;
+import coordination.core.margin.DcOffset;
+import coordination.core.margin.GradingRequirement;
+import coordination.core.margin.MarginRequirement;
+import coordination.core.network.Bus;
+import coordination.core.network.FaultLevel;
+import coordination.core.network.FaultLevels;
+import coordination.core.network.Network;
+import java.util.ArrayList;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Map;
+import java.util.Optional;
+
+/**
+ * The checks a network implies: every cable against the first device upstream of it, and every
+ * pair of adjacent devices on a path from the source, each over the currents its position sees.
+ *
+ * <ul>
+ * <li>A cable: from the minimum phase-to-phase current at its far end to the maximum three-phase
+ * current at its sending end, with κ from the sending end's R/X for the DC-offset heating.</li>
+ * <li>A pair: from the smallest fault both devices see, the minimum phase-to-phase current at the
+ * far end of the downstream device's branch, to the largest through-fault at the downstream
+ * device, its bus's maximum three-phase current. Across a delta-star transformer, the three-phase
+ * and the phase-to-phase case are checked apart: in the latter one HV phase carries 2/√3 of the
+ * LV current referred.</li>
+ * </ul>
+ *
+ * Requirements by kinds (common practice): cable margin 0 s; relay over relay 0.3 s (IEEE 242's
+ * interval for electromechanical relays, from memory); relay over a fuse or breaker 0.2 s; any
+ * other pair no overlap of the bands, which for fuses over fuses includes their energies.
+ */
+final class Derivation {
+    private final Study.StudyNetwork net;
+    private final Map<String, Study.StudyDevice> devices;
+    private final Map<String, Study.StudyCable> cables;
+    private final double studyKv;
+    private final double frequencyHz;
+    private final NetworkSection section;
+    private final List<Note> warnings = new ArrayList<>();
+
+    /** A derived pair, in study order of discovery. */
+    record Pair(String upstream, String downstream) {
+    }
+
+    Derivation(Study.StudyNetwork net, Map<String, Study.StudyDevice> devices, Map<String, Study.StudyCable> cables,
+            double studyKv, double frequencyHz, NetworkSection section) {
+        this.net = net;
+        this.devices = devices;
+        this.cables = cables;
+        this.studyKv = studyKv;
+        this.frequencyHz = frequencyHz;
+        this.section = section;
+    }
+
+    List<Note> warnings() {
+        return warnings;
+    }
+
+    private FaultLevels levels() {
+        return net.levels();
+    }
+
+    private Map<String, Bus> buses() {
+        return net.network().busMap();
+    }
+
+    /** A position along a path: the branch's index and 0 at its near end, 1 at its far end. */
+    private record Spot(String device, int branch, int rank) {
+    }
+
+    private String nearBus(Network.Branch br) {
+        String child = br.equals(levels().parents().get(br.b())) ? br.b() : br.a();
+        return child.equals(br.a()) ? br.b() : br.a();
+    }
+
+    private String farBus(Network.Branch br) {
+        return nearBus(br).equals(br.a()) ? br.b() : br.a();
+    }
+
+    private String busOf(String device) {
+        Study.Placement p = net.placements().get(device);
+        Network.Branch br = net.network().branch(p.branch()).orElseThrow();
+        return p.end() == Study.End.FROM ? br.a() : br.b();
+    }
+
+    private List<Spot> devicesOn(List<Network.Branch> path) {
+        List<Spot> spots = new ArrayList<>();
+        for (int i = 0; i < path.size(); i++) {
+            Network.Branch br = path.get(i);
+            String near = nearBus(br);
+            for (int rank = 0; rank < 2; rank++) {
+                for (Map.Entry<String, Study.Placement> e : net.placements().entrySet()) {
+                    if (e.getValue().branch().equals(br.id()) && (busOf(e.getKey()).equals(near) == (rank == 0))) {
+                        spots.add(new Spot(e.getKey(), i, rank));
+                    }
+                }
+            }
+        }
+        return spots;
+    }
+
+    private List<String> leaves() {
+        List<String> out = new ArrayList<>();
+        for (Bus bus : net.network().buses()) {
+            boolean parent = false;
+            for (Network.Branch br : levels().parents().values()) {
+                parent |= nearBus(br).equals(bus.id());
+            }
+            if (!parent) {
+                out.add(bus.id());
+            }
+        }
+        return out;
+    }
+
+    /** @return the paths from the source, one per load-end bus, as device sequences */
+    List<List<String>> paths() {
+        List<List<String>> out = new ArrayList<>();
+        for (String leaf : leaves()) {
+            out.add(devicesOn(levels().pathTo(leaf)).stream().map(Spot::device).toList());
+        }
+        return out;
+    }
+
+    /** Current at a bus referred to the study's reference voltage. */
+    private double refer(double amps, String bus) {
+        return amps * buses().get(bus).voltageKv() / studyKv;
+    }
+
+    private FaultLevel at(String bus) {
+        return levels().at(bus).orElseThrow();
+    }
+
+    /** The derived cable checks. */
+    Map<String, Study.CableCheckSpec> cableChecks() {
+        Map<String, Study.CableCheckSpec> out = new LinkedHashMap<>();
+        for (var c : net.network().cables()) {
+            Network.Branch br = net.network().branch(c.id()).orElseThrow();
+            if (!levels().parents().containsValue(br)) {
+                continue;
+            }
+            String far = farBus(br);
+            List<Network.Branch> path = levels().pathTo(far);
+            List<Spot> spots = devicesOn(path);
+            int k = path.size() - 1;
+            Spot protector = null;
+            for (Spot s : spots) {
+                if (s.branch() < k || s.branch() == k && s.rank() == 0) {
+                    protector = s;
+                }
+            }
+            if (protector == null) {
+                warnings.add(new Note("cable-unprotected", "cable '" + c.id() + "': no device upstream of it in the"
+                        + " network, so it is not checked"));
+                continue;
+            }
+            String from = nearBus(br);
+            if (Math.abs(buses().get(from).voltageKv() / studyKv - 1) > 1e-9) {
+                warnings.add(new Note("cable-not-at-reference", "cable '" + c.id() + "': at "
+                        + buses().get(from).voltageKv() + " kV, not the study's reference " + studyKv
+                        + " kV, so its check is not derived"));
+                continue;
+            }
+            FaultLevel send = at(from);
+            FaultLevel end = at(far);
+            double lo = refer(end.ik2MinAmps(), far);
+            double hi = refer(send.ik3MaxAmps(), from);
+            if (!(hi > lo)) {
+                continue;
+            }
+            out.put(c.id(), new Study.CableCheckSpec(c.id(), protector.device(),
+                    MarginRequirement.seconds(section.cableMarginSeconds()), new Study.CurrentRange(lo, hi),
+                    Optional.of(new DcOffset(send.kappa(), frequencyHz)), Study.DcSource.FROM_NETWORK, true));
+        }
+        return out;
+    }
+
+    /** The derived grading checks, by pair; a pair across a delta-star transformer has two. */
+    Map<Pair, List<Study.GradingCheckSpec>> gradingChecks() {
+        Map<Pair, List<Study.GradingCheckSpec>> out = new LinkedHashMap<>();
+        for (String leaf : leaves()) {
+            List<Network.Branch> path = levels().pathTo(leaf);
+            List<Spot> spots = devicesOn(path);
+            for (int i = 0; i + 1 < spots.size(); i++) {
+                Spot up = spots.get(i);
+                Spot down = spots.get(i + 1);
+                Pair pair = new Pair(up.device(), down.device());
+                if (out.containsKey(pair)) {
+                    continue;
+                }
+                out.put(pair, pairChecks(up, down, path));
+            }
+        }
+        return out;
+    }
+
+    private List<Study.GradingCheckSpec> pairChecks(Spot up, Spot down, List<Network.Branch> path) {
+        Network.Branch downBranch = path.get(down.branch());
+        String location = busOf(down.device());
+        String far = farBus(downBranch);
+        FaultLevel max = at(location);
+        FaultLevel min = at(far);
+        GradingRequirement req = requirement(devices.get(up.device()).device().kind(),
+                devices.get(down.device()).device().kind());
+        boolean deltaStar = false;
+        for (int i = up.branch(); i <= down.branch(); i++) {
+            Network.Branch br = path.get(i);
+            boolean between = (i > up.branch() || up.rank() == 0) && (i < down.branch() || down.rank() == 1);
+            if (between && br instanceof Network.TransformerBranch t && t.transformer().deltaStar()) {
+                deltaStar = true;
+            }
+        }
+        List<Study.GradingCheckSpec> out = new ArrayList<>();
+        if (!deltaStar) {
+            double lo = refer(min.ik2MinAmps(), far);
+            double hi = refer(max.ik3MaxAmps(), location);
+            if (hi > lo) {
+                out.add(new Study.GradingCheckSpec(up.device(), down.device(), req, new Study.CurrentRange(lo, hi),
+                        true, "", 1.0));
+            }
+            return out;
+        }
+        double lo3 = refer(min.ik3MinAmps(), far);
+        double hi3 = refer(max.ik3MaxAmps(), location);
+        if (hi3 > lo3) {
+            out.add(new Study.GradingCheckSpec(up.device(), down.device(), req, new Study.CurrentRange(lo3, hi3), true,
+                    "three-phase", 1.0));
+        }
+        double lo2 = refer(min.ik2MinAmps(), far);
+        double hi2 = refer(Math.sqrt(3) / 2 * max.ik3MaxAmps(), location);
+        if (hi2 > lo2) {
+            out.add(new Study.GradingCheckSpec(up.device(), down.device(), req, new Study.CurrentRange(lo2, hi2), true,
+                    "phase-to-phase", 2 / Math.sqrt(3)));
+        }
+        return out;
+    }
+
+    private GradingRequirement requirement(DeviceKind up, DeviceKind down) {
+        if (up == DeviceKind.RELAY && down == DeviceKind.RELAY) {
+            return GradingRequirement.intervalSeconds(section.relayOverRelaySeconds());
+        }
+        if (up == DeviceKind.RELAY) {
+            return GradingRequirement.intervalSeconds(section.relayOverOtherSeconds());
+        }
+        return GradingRequirement.noOverlap();
+    }
+}
