@@ -91,6 +91,15 @@ class SchemaTest {
      */
     static final java.util.Map<String, String> SCHEMA_CANNOT_TELL = java.util.Map.ofEntries(
             java.util.Map.entry("breaker-band-inverted", "relates two values: the band's high edge to its low edge"),
+            java.util.Map.entry("grading-no-range", "relates sections: a grading range may be left out when the study"
+                    + " has a network that derives it"),
+            java.util.Map.entry("network-accept-not-derived", "needs a model: which pairs the network derives"),
+            java.util.Map.entry("network-branch-without-network", "relates sections: branch keys need a network"),
+            java.util.Map.entry("network-bus-not-declared", "relates ids across lists: the bus must be declared"),
+            java.util.Map.entry("network-device-on-unknown-branch", "relates ids across lists: the branch must exist"),
+            java.util.Map.entry("network-loop", "needs a model: the network's topology"),
+            java.util.Map.entry("network-transformer-voltages", "relates values across lists: the buses' voltages"),
+            java.util.Map.entry("network-two-sources", "needs a model: the network's topology"),
             java.util.Map.entry("breaker-isd-below-ir", "relates two values: Isd must lie above Ir"),
             java.util.Map.entry("cable-duplicate-id", "ids unique by one key across the list"),
             java.util.Map.entry("cable-fault-inverted", "relates two values: max at or above min"),

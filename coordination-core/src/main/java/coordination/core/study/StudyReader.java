@@ -147,6 +147,7 @@ public final class StudyReader {
     /** The design limits of the relay just read; none for other devices. */
     private Study.DesignLimits designLimits = Study.DesignLimits.NONE;
     private NetworkSection network;
+    private boolean networkBuilt;
     private Map<String, Study.CableCheckSpec> derivedCables = Map.of();
     private Map<Derivation.Pair, List<Study.GradingCheckSpec>> derivedPairs = Map.of();
     private OptionalDouble frequency = OptionalDouble.empty();
@@ -300,6 +301,7 @@ public final class StudyReader {
         Map<String, Study.StudyCable> cables = items(root, "cables", "cable", this::cable, Study.StudyCable::id);
         Map<String, Study.StudyDevice> devices = items(root, "devices", "device", this::device, Study.StudyDevice::id);
         Optional<Study.StudyNetwork> net = problems.isEmpty() ? network.build() : Optional.empty();
+        networkBuilt = net.isPresent();
         Map<String, Study.CableCheckSpec> derivedCables = new LinkedHashMap<>();
         Map<Derivation.Pair, List<Study.GradingCheckSpec>> derivedPairs = new LinkedHashMap<>();
         List<Note> networkWarnings = new ArrayList<>();
@@ -1190,10 +1192,16 @@ public final class StudyReader {
         }
         List<Study.GradingCheckSpec> derived = up.isPresent() && down.isPresent()
                 ? derivedPairs.getOrDefault(new Derivation.Pair(up.get(), down.get()), List.of()) : List.of();
-        Optional<double[]> range = b.rangeKa(m, path, "range_ka", derived.isEmpty());
+        // with a network that could not be built, a missing range is not a problem of its own
+        Optional<double[]> range = b.rangeKa(m, path, "range_ka", derived.isEmpty() && !network.present());
         if (up.isPresent() && up.equals(down)) {
             b.problem(b.value(m, "downstream"), path + ".downstream", "the same device as upstream, '" + up.get() + "'");
             return List.of();
+        }
+        if (range.isEmpty() && derived.isEmpty() && network.present() && networkBuilt && up.isPresent()
+                && down.isPresent() && !b.has(m, "range_ka")) {
+            b.missing(m, path, "range_ka", "the network derives no pair '" + up.get() + "' over '" + down.get()
+                    + "', so the check needs its own range");
         }
         if (up.isEmpty() || down.isEmpty() || req.isEmpty() || (range.isEmpty() && derived.isEmpty())) {
             return List.of();

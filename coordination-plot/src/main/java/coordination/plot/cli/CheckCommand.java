@@ -6,6 +6,7 @@ import coordination.core.margin.GradingCheckResult;
 import coordination.core.study.Problem;
 import coordination.core.study.ReportWriter;
 import coordination.core.study.Sensitivity;
+import coordination.core.study.Study;
 import coordination.core.study.StudyReport;
 import coordination.core.Quantities;
 import java.io.PrintStream;
@@ -132,12 +133,17 @@ final class CheckCommand implements Callable<Integer> {
 
     private void table(StudyReport r) {
         out.println(r.study().name() + ": " + r.study().title() + " - " + (r.pass() ? "PASS" : "FAIL"));
-        for (CheckResult o : r.results()) {
+        for (int i = 0; i < r.results().size(); i++) {
+            CheckResult o = r.results().get(i);
             double[] crossings = o instanceof CableCheckResult c ? c.crossingsAmps()
                     : ((GradingCheckResult) o).crossingsAmps();
-            out.println("  " + (o.pass() ? "pass" : "FAIL") + "  " + describe(o) + ": " + o.reason()
+            String fault = r.study().checks().get(i) instanceof Study.GradingCheckSpec g && !g.faultCase().isEmpty()
+                    ? " (" + g.faultCase() + " fault)" : "";
+            out.println("  " + (o.pass() ? "pass" : "FAIL") + "  " + describe(o) + fault + ": " + o.reason()
                     + crossings(crossings));
         }
+        r.study().network().ifPresent(n -> n.accepted().forEach(a -> out.println("  accepted, not selective:  "
+                + a.downstream() + " under " + a.upstream() + ": " + a.reason())));
         notes(r);
     }
 

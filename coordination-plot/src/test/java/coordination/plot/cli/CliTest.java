@@ -77,8 +77,8 @@ class CliTest {
     void sheetWritesSheetsAndReportsForAFolder(@TempDir Path tmp) throws Exception {
         InProcess.Run r = run("sheet", SAMPLES.toString(), "-o", tmp.toString(), "--format", "svg,png,pdf");
         assertThat(r.code(), is(ExitCodes.CHECK_FAILED));
-        assertThat(r.out(), containsString("sheets: 6 studies, 5 pass, 1 fail, 0 not read; 24 files in"));
-        assertThat(files(tmp).size(), is(24));
+        assertThat(r.out(), containsString("sheets: 7 studies, 6 pass, 1 fail, 0 not read; 28 files in"));
+        assertThat(files(tmp).size(), is(28));
     }
 
     @Test
@@ -245,6 +245,18 @@ class CliTest {
         InProcess.Run bad = run("check", "--sensitivity=1.2,1.1", s.toString());
         assertThat(bad.code(), is(ExitCodes.BAD_INPUT));
         assertThat(bad.err(), containsString("give MIN,MAX with 0 < MIN <= 1 <= MAX"));
+    }
+
+    @Test
+    void faultsPrintsTheNetworksLevelsOrRefusesAStudyWithoutOne() {
+        InProcess.Run r = run("faults", SAMPLES.resolve("07-works-network.yaml").toString());
+        assertThat(r.err(), r.code(), is(ExitCodes.PASS));
+        assertThat(r.out(), containsString("MSB                         24.4 kA    20.6 kA    17.8 kA     1.6    55.3 kA"));
+        InProcess.Run j = run("faults", "--json", SAMPLES.resolve("07-works-network.yaml").toString());
+        assertThat(j.out(), containsString("\"at\" : \"P1-cable:to\""));
+        InProcess.Run none = run("faults", SAMPLES.resolve("05-blower-feeder-undersized.yaml").toString());
+        assertThat(none.code(), is(ExitCodes.BAD_INPUT));
+        assertThat(none.err(), containsString("the study has no network section"));
     }
 
     @Test
