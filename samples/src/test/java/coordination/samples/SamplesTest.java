@@ -59,9 +59,12 @@ class SamplesTest {
         Map<String, byte[]> files = SheetWriter.render(s, StudyReport.evaluate(s), EnumSet.allOf(OutputFormat.class),
                 150);
         SheetWriter.write(tmp, files);
+        // three formats and the report, and for a network study three formats per path from the source
+        long paths = coordination.core.study.StudyPaths.of(s).size();
         try (Stream<Path> written = Files.list(tmp)) {
-            assertThat(written.count(), is(4L));
+            assertThat(written.count(), is(4L + 3 * paths));
         }
+        assertThat(s.network().isPresent() == (paths > 0), is(true));
     }
 
     @Test

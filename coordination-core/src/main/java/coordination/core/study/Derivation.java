@@ -116,11 +116,23 @@ final class Derivation {
         return out;
     }
 
-    /** @return the paths from the source, one per load-end bus, as device sequences */
-    List<List<String>> paths() {
-        List<List<String>> out = new ArrayList<>();
+    /**
+     * A path from the source to a load-end bus.
+     *
+     * @param leaf the load-end bus
+     * @param branches the branch ids, from the source
+     * @param devices the devices on it, from the source
+     */
+    record Route(String leaf, List<String> branches, List<String> devices) {
+    }
+
+    /** @return the paths from the source, one per load-end bus */
+    List<Route> routes() {
+        List<Route> out = new ArrayList<>();
         for (String leaf : leaves()) {
-            out.add(devicesOn(levels().pathTo(leaf)).stream().map(Spot::device).toList());
+            List<Network.Branch> path = levels().pathTo(leaf);
+            out.add(new Route(leaf, path.stream().map(Network.Branch::id).toList(),
+                    devicesOn(path).stream().map(Spot::device).toList()));
         }
         return out;
     }

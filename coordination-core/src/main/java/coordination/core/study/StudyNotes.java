@@ -57,6 +57,14 @@ final class StudyNotes {
                     + " credited; the cable withstands 5 s or its adiabatic time, whichever is longer"));
         }
         out.addAll(study.device(c.device()).assumptions());
+        // the network's defaults for this cable's impedance decide its fault range
+        study.network().ifPresent(n -> n.warnings().stream().filter(w -> isCableAssumption(w)
+                && w.message().startsWith(who + ":")).forEach(out::add));
+    }
+
+    /** Whether a network note is an assumption about a cable's impedance rather than a warning. */
+    static boolean isCableAssumption(Note n) {
+        return n.code().equals("cable-resistance-assumed") || n.code().equals("cable-reactance-assumed");
     }
 
     private static void grading(Study study, Study.GradingCheckSpec g, List<Note> out) {

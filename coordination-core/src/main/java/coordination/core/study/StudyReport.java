@@ -72,7 +72,8 @@ public record StudyReport(Study study, List<CheckResult> results, List<CheckNote
             notes.add(StudyNotes.of(study, c, results.get(results.size() - 1)));
         }
         List<Note> warnings = new ArrayList<>(rideThrough(study));
-        study.network().ifPresent(n -> warnings.addAll(n.warnings()));
+        study.network().ifPresent(n -> n.warnings().stream().filter(w -> !StudyNotes.isCableAssumption(w))
+                .forEach(warnings::add));
         return new StudyReport(study, results, notes, warnings);
     }
 

@@ -104,7 +104,7 @@ public final class CoordinationSheet {
         double top = titleBlock(g);
         double footerTop = height - MARGIN - 30;
         double chartW = Math.round((width - 2 * MARGIN) * 0.58);
-        int rows = 0;
+        int rows = study.network().map(n -> n.accepted().size()).orElse(0);
         for (CheckResult o : report.results()) {
             rows += o.pass() ? 1 : 2;
         }
@@ -276,6 +276,21 @@ public final class CoordinationSheet {
                 lineCount += 5;
             }
         }
+        if (study.network().isPresent()) {
+            blocks.add(new Block(List.of("Fault levels (IEC 60909-0)"), -1, true));
+            lineCount += 2;
+            var net = study.network().get();
+            for (var bus : net.network().buses()) {
+                var f = net.levels().at(bus.id()).orElseThrow();
+                blocks.add(new Block(List.of(bus.id() + " at " + Quantities.asGiven(bus.voltageKv()) + " kV",
+                        "Ik3 max " + Quantities.current(f.ik3MaxAmps(), 3) + ", Ik3 min "
+                                + Quantities.current(f.ik3MinAmps(), 3) + ", Ik2 min "
+                                + Quantities.current(f.ik2MinAmps(), 3),
+                        "κ " + Quantities.significant(f.kappa(), 3) + ", ip " + Quantities.current(f.ipAmps(), 3)),
+                        -2, false));
+                lineCount += 3;
+            }
+        }
         boolean two = cy + 9 * lineCount + 2 * blocks.size() > bottom;
         double line = two ? 7.6 : 9;
         float size = two ? 6.3f : 7f;
@@ -300,6 +315,7 @@ public final class CoordinationSheet {
                 continue;
             }
             boolean isDevice = b.device() >= 0;
+            boolean isLevel = b.device() == -2;
             double indent = isDevice ? 16 : 0;
             if (isDevice) {
                 g.setColor(Palette.device(b.device()));
@@ -319,7 +335,7 @@ public final class CoordinationSheet {
             cy += 2;
             if (isDevice) {
                 shownDevices++;
-            } else {
+            } else if (!isLevel) {
                 shownCables++;
             }
         }
@@ -356,12 +372,17 @@ public final class CoordinationSheet {
         }
         cy += 10;
         int shown = 0;
-        for (CheckResult o : report.results()) {
+        for (int index = 0; index < report.results().size(); index++) {
+            CheckResult o = report.results().get(index);
             int rows = o.pass() ? 1 : 2;
             if (cy + 10 * rows > bottom) {
                 break;
             }
             String[] cells = cells(o);
+            if (report.study().checks().get(index) instanceof Study.GradingCheckSpec spec
+                    && !spec.faultCase().isEmpty()) {
+                cells[0] = cells[0] + " (" + spec.faultCase() + ")";
+            }
             boolean pass = o.pass();
             g.setFont(Palette.font(Font.PLAIN, 7f));
             for (int i = 0; i < cells.length; i++) {
@@ -385,6 +406,18 @@ public final class CoordinationSheet {
         if (shown < report.results().size()) {
             g.setColor(Color.BLACK);
             text(g, "+ " + (report.results().size() - shown) + " more checks in the report", x, cy + 7.5);
+            cy += 10;
+        }
+        for (Study.Accepted a : study.network().map(Study.StudyNetwork::accepted).orElse(List.of())) {
+            if (cy + 10 > bottom) {
+                break;
+            }
+            g.setFont(Palette.font(Font.PLAIN, 7f));
+            g.setColor(Color.BLACK);
+            text(g, fit(g, a.downstream() + " under " + a.upstream(), col[1] - x - 4), x, cy + 7.5);
+            g.setColor(Palette.MARK);
+            text(g, fit(g, "accepted, not selective: " + a.reason(), w - (col[1] - x)), col[1], cy + 7.5);
+            cy += 10;
         }
     }
 

@@ -77,7 +77,8 @@ public final class SheetWriter {
     }
 
     /**
-     * Renders the files of one study: {@code NAME.FORMAT} for each format and {@code NAME.report.json}.
+     * Renders the files of one study: {@code NAME.FORMAT} for each format and {@code NAME.report.json};
+     * for a study with a network also {@code NAME.path-N.FORMAT}, a sheet per path from the source.
      *
      * @param study the study
      * @param report its report
@@ -98,6 +99,15 @@ public final class SheetWriter {
             }
         }
         files.put(names.get(k), ReportWriter.write(report).getBytes(StandardCharsets.UTF_8));
+        // a network study also gets a sheet per path from the source to a load end
+        for (Study path : coordination.core.study.StudyPaths.of(study)) {
+            CoordinationSheet one = new CoordinationSheet(path, StudyReport.evaluate(path));
+            for (OutputFormat f : OutputFormat.values()) {
+                if (formats.contains(f)) {
+                    files.put(safeName(path.name()) + "." + f.extension(), one.render(f, dpi));
+                }
+            }
+        }
         return files;
     }
 
