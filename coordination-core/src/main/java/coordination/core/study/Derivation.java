@@ -40,6 +40,10 @@ final class Derivation {
     private final double frequencyHz;
     private final NetworkSection section;
     private final List<Note> warnings = new ArrayList<>();
+    /** The devices on each branch, in the study's order, and the bus each device sits at. */
+    private final Map<String, List<String>> onBranch = new LinkedHashMap<>();
+    private final Map<String, String> deviceBus = new LinkedHashMap<>();
+    private final Map<String, Network.Branch> branchById = new LinkedHashMap<>();
 
     /** A derived pair, in study order of discovery. */
     record Pair(String upstream, String downstream) {
@@ -53,6 +57,12 @@ final class Derivation {
         this.studyKv = studyKv;
         this.frequencyHz = frequencyHz;
         this.section = section;
+        net.network().branches().forEach(br -> branchById.put(br.id(), br));
+        for (Map.Entry<String, Study.Placement> e : net.placements().entrySet()) {
+            Network.Branch br = branchById.get(e.getValue().branch());
+            onBranch.computeIfAbsent(br.id(), k -> new ArrayList<>()).add(e.getKey());
+            deviceBus.put(e.getKey(), e.getValue().end() == Study.End.FROM ? br.a() : br.b());
+        }
     }
 
     List<Note> warnings() {
@@ -81,9 +91,7 @@ final class Derivation {
     }
 
     private String busOf(String device) {
-        Study.Placement p = net.placements().get(device);
-        Network.Branch br = net.network().branch(p.branch()).orElseThrow();
-        return p.end() == Study.End.FROM ? br.a() : br.b();
+        return deviceBus.get(device);
     }
 
     private List<Spot> devicesOn(List<Network.Branch> path) {
@@ -92,9 +100,9 @@ final class Derivation {
             Network.Branch br = path.get(i);
             String near = nearBus(br);
             for (int rank = 0; rank < 2; rank++) {
-                for (Map.Entry<String, Study.Placement> e : net.placements().entrySet()) {
-                    if (e.getValue().branch().equals(br.id()) && (busOf(e.getKey()).equals(near) == (rank == 0))) {
-                        spots.add(new Spot(e.getKey(), i, rank));
+                for (String device : onBranch.getOrDefault(br.id(), List.of())) {
+                    if (busOf(device).equals(near) == (rank == 0)) {
+                        spots.add(new Spot(device, i, rank));
                     }
                 }
             }
@@ -103,13 +111,13 @@ final class Derivation {
     }
 
     private List<String> leaves() {
+        java.util.Set<String> feeding = new java.util.HashSet<>();
+        for (Network.Branch br : levels().parents().values()) {
+            feeding.add(nearBus(br));
+        }
         List<String> out = new ArrayList<>();
         for (Bus bus : net.network().buses()) {
-            boolean parent = false;
-            for (Network.Branch br : levels().parents().values()) {
-                parent |= nearBus(br).equals(bus.id());
-            }
-            if (!parent) {
+            if (!feeding.contains(bus.id())) {
                 out.add(bus.id());
             }
         }
@@ -150,7 +158,7 @@ final class Derivation {
     Map<String, Study.CableCheckSpec> cableChecks() {
         Map<String, Study.CableCheckSpec> out = new LinkedHashMap<>();
         for (var c : net.network().cables()) {
-            Network.Branch br = net.network().branch(c.id()).orElseThrow();
+            Network.Branch br = branchById.get(c.id());
             if (!levels().parents().containsValue(br)) {
                 continue;
             }
