@@ -148,6 +148,12 @@ final class NetworkSection {
             b.problem(b.value(m, "id"), path + ".id", "a second bus '" + id.get() + "' - bus ids must be unique");
             return;
         }
+        if (!b.has(m, "c_max") || !b.has(m, "c_min")) {
+            notes.add(new Note("bus-voltage-factors-assumed", "bus '" + id.get() + "': c_max "
+                    + Checks.format(cMax.getAsDouble()) + " and c_min " + Checks.format(cMin.getAsDouble())
+                    + " assumed, IEC 60909-0 Table 1" + (kv.getAsDouble() <= 1.0 ? " (the +6 % tolerance row; a"
+                    + " +10 % system takes c_max 1.10)" : "")));
+        }
         buses.add(new Bus(id.get(), kv.getAsDouble(), cMax.getAsDouble(), cMin.getAsDouble()));
         remember("bus", id.get(), m, path);
     }

@@ -30,6 +30,14 @@ final class StudyNotes {
             }
             grading(study, g, warnings);
         }
+        // the currents of a check the network gives rest on its buses' voltage factors
+        boolean derivedRange = spec instanceof Study.CableCheckSpec cc && cc.dcSource() == Study.DcSource.FROM_NETWORK
+                || spec instanceof Study.GradingCheckSpec gs && gs.derived();
+        if (derivedRange) {
+            study.network().ifPresent(n -> n.warnings().stream()
+                    .filter(w -> w.code().equals("bus-voltage-factors-assumed") && !assumptions.contains(w))
+                    .forEach(assumptions::add));
+        }
         return new StudyReport.CheckNotes(assumptions, warnings);
     }
 
@@ -64,7 +72,8 @@ final class StudyNotes {
 
     /** Whether a network note is an assumption about a cable's impedance rather than a warning. */
     static boolean isCableAssumption(Note n) {
-        return n.code().equals("cable-resistance-assumed") || n.code().equals("cable-reactance-assumed");
+        return n.code().equals("cable-resistance-assumed") || n.code().equals("cable-reactance-assumed")
+                || n.code().equals("bus-voltage-factors-assumed");
     }
 
     private static void grading(Study study, Study.GradingCheckSpec g, List<Note> out) {
