@@ -30,13 +30,30 @@ import org.apache.commons.math3.complex.Complex;
  * @param network the network
  * @param levels the levels at every bus (in the network's order), then at both ends of every cable
  * @param parents the branch feeding each bus from the source's side, absent for source buses
+ * @param impedances each bus's source impedance at its own voltage, {R max, X max, R min, X min} in Ω
  */
-public record FaultLevels(Network network, List<FaultLevel> levels, Map<String, Network.Branch> parents) {
+public record FaultLevels(Network network, List<FaultLevel> levels, Map<String, Network.Branch> parents,
+        Map<String, double[]> impedances) {
 
     /** Copies the collections in. */
     public FaultLevels {
         levels = List.copyOf(levels);
         parents = Collections.unmodifiableMap(new LinkedHashMap<>(parents));
+        Map<String, double[]> z = new LinkedHashMap<>();
+        impedances.forEach((k, v) -> z.put(k, v.clone()));
+        impedances = Collections.unmodifiableMap(z);
+    }
+
+    /**
+     * The impedance from the source to a bus, at the bus's voltage.
+     *
+     * @param bus the bus
+     * @param max the maximum case (else the minimum)
+     * @return {R, X} in Ω
+     */
+    public double[] impedance(String bus, boolean max) {
+        double[] z = impedances.get(bus);
+        return max ? new double[] {z[0], z[1]} : new double[] {z[2], z[3]};
     }
 
     /**
@@ -96,7 +113,13 @@ public record FaultLevels(Network network, List<FaultLevel> levels, Map<String, 
                         l.ik3MinAmps(), l.ik2MinAmps(), l.kappa(), l.ipAmps(), l.rOverX()));
             }
         }
-        return new FaultLevels(network, levels, parents);
+        Map<String, double[]> impedances = new LinkedHashMap<>();
+        for (Bus b : network.buses()) {
+            Complex a = zMax.get(b.id());
+            Complex c = zMin.get(b.id());
+            impedances.put(b.id(), new double[] {a.getReal(), a.getImaginary(), c.getReal(), c.getImaginary()});
+        }
+        return new FaultLevels(network, levels, parents, impedances);
     }
 
     /**

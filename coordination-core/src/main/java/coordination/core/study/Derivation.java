@@ -191,11 +191,100 @@ final class Derivation {
             if (!(hi > lo)) {
                 continue;
             }
-            out.put(c.id(), new Study.CableCheckSpec(c.id(), protector.device(),
-                    MarginRequirement.seconds(section.cableMarginSeconds()), new Study.CurrentRange(lo, hi),
-                    Optional.of(new DcOffset(send.kappa(), frequencyHz)), Study.DcSource.FROM_NETWORK, true));
+            MarginRequirement req = MarginRequirement.seconds(section.cableMarginSeconds());
+            Optional<DcOffset> dc = Optional.of(new DcOffset(send.kappa(), frequencyHz));
+            out.put(c.id(), new Study.CableCheckSpec(c.id(), protector.device(), req, new Study.CurrentRange(lo, hi),
+                    dc, Study.DcSource.FROM_NETWORK, true));
+            if (c.parallel() > 1) {
+                parallelCheck(c, protector.device(), from, req, dc).ifPresent(p -> out.put(c.id() + "#parallel", p));
+            }
         }
         return out;
+    }
+
+    /**
+     * IEC 60364-4-43, 434.4: a fault inside one of n parallel conductors is fed from both ends, and
+     * the faulted conductor carries more than 1/n of the current the device sees. At a fraction x
+     * of the length, the near part (x z) and the path through the other conductors and back
+     * (z/(n−1) + (1−x) z) share the current as B/(A+B) and A/(A+B); the device sees the whole. The
+     * worst position is the one of least margin: a scan over x, refined by Brent's method.
+     */
+    private Optional<Study.CableCheckSpec> parallelCheck(coordination.core.network.CableBranch c, String device,
+            String from, MarginRequirement req, Optional<DcOffset> dc) {
+        int n = c.parallel();
+        Bus bus = buses().get(from);
+        double[] upMax = levels().impedance(from, true);
+        double[] upMin = levels().impedance(from, false);
+        double len = c.lengthM() / 1000;
+        double rMax = c.rOhmPerKm() * len;
+        double rMin = c.rOhmPerKm() * len * (1 + coordination.core.network.CableBranch.ALPHA_PER_K
+                * (c.endTemperatureC() - 20));
+        double xz = c.xOhmPerKm() * len;
+        java.util.function.DoubleFunction<Study.CableCheckSpec> at = x -> {
+            double[] split = parallelFault(n, x);
+            double share = split[0];
+            double parallelPart = split[1];
+            double iMax = bus.cMax() * bus.voltageKv() * 1000 / (Math.sqrt(3)
+                    * Math.hypot(upMax[0] + parallelPart * rMax, upMax[1] + parallelPart * xz));
+            double iMin = Math.sqrt(3) / 2 * bus.cMin() * bus.voltageKv() * 1000 / (Math.sqrt(3)
+                    * Math.hypot(upMin[0] + parallelPart * rMin, upMin[1] + parallelPart * xz));
+            return new Study.CableCheckSpec(c.id(), device, req, new Study.CurrentRange(refer(share * iMin, from),
+                    refer(share * iMax, from)), dc, Study.DcSource.FROM_NETWORK, true,
+                    "fault inside one of " + n + " parallel conductors " + (x < 1e-3 ? "at its sending end"
+                    : x > 1 - 1e-3 ? "at its far end" : "at " + coordination.core.Quantities.significant(x, 3)
+                    + " of its length"), share);
+        };
+        Study.StudyCable cable = cables.get(c.id());
+        java.util.function.DoubleUnaryOperator margin = x -> {
+            Study.CableCheckSpec spec = at.apply(x);
+            double m = new coordination.core.margin.CableCheck(devices.get(device).referred().referredBy(spec
+                    .conductorShare()), cable.limit().withParallel(1), spec.range().fromAmps(), spec.range().toAmps(),
+                    req, dc.orElse(null)).result().minMarginSeconds();
+            return Double.isNaN(m) ? Double.NEGATIVE_INFINITY : m;
+        };
+        int steps = 20;
+        double eps = 1e-6;
+        double bestX = eps;
+        double best = Double.POSITIVE_INFINITY;
+        for (int i = 0; i <= steps; i++) {
+            double x = Math.min(1 - eps, Math.max(eps, (double) i / steps));
+            double m = margin.applyAsDouble(x);
+            if (m < best) {
+                best = m;
+                bestX = x;
+            }
+        }
+        if (Double.isFinite(best)) {
+            double lo = Math.max(eps, bestX - 1.0 / steps);
+            double hi = Math.min(1 - eps, bestX + 1.0 / steps);
+            var opt = new org.apache.commons.math3.optim.univariate.BrentOptimizer(1e-10, 1e-12);
+            var r = opt.optimize(new org.apache.commons.math3.optim.MaxEval(200),
+                    new org.apache.commons.math3.optim.univariate.UnivariateObjectiveFunction(margin::applyAsDouble),
+                    org.apache.commons.math3.optim.nonlinear.scalar.GoalType.MINIMIZE,
+                    new org.apache.commons.math3.optim.univariate.SearchInterval(lo, hi, bestX));
+            if (r.getValue() < best) {
+                bestX = r.getPoint();
+            }
+        }
+        Study.CableCheckSpec worst = at.apply(bestX);
+        return worst.range().toAmps() > worst.range().fromAmps() ? Optional.of(worst) : Optional.empty();
+    }
+
+    /**
+     * The current division for a fault at a fraction of the length of one of n parallel conductors
+     * joined at both ends. The near part (x z) and the path through the other conductors and back
+     * (z/(n−1) + (1−x) z) are in phase, so the shares are real.
+     *
+     * @param n the number of conductors, at least 2
+     * @param x the fault position as a fraction of the length from the sending end
+     * @return {the larger share of the fault current in the faulted conductor, the impedance from
+     *     the sending end to the fault as a fraction of one conductor's}
+     */
+    static double[] parallelFault(int n, double x) {
+        double total = (double) n / (n - 1);
+        double a = x;
+        double b = total - x;
+        return new double[] {Math.max(a, b) / total, a * b / total};
     }
 
     /** The derived grading checks, by pair; a pair across a delta-star transformer has two. */

@@ -239,7 +239,9 @@ public final class ReportWriter {
     private static void check(JsonOut j, CheckResult result, StudyReport.CheckNotes notes, Study.StudyCheck spec) {
         if (result instanceof CableCheckResult c) {
             cableCheck(j, c);
-            j.bool("derived", spec instanceof Study.CableCheckSpec cc && cc.derived());
+            Study.CableCheckSpec cs = spec instanceof Study.CableCheckSpec x ? x : null;
+            j.bool("derived", cs != null && cs.derived())
+                    .text("fault_case", cs == null || cs.faultCase().isEmpty() ? null : cs.faultCase());
         } else if (result instanceof GradingCheckResult g) {
             gradingCheck(j, g);
             Study.GradingCheckSpec gs = spec instanceof Study.GradingCheckSpec x ? x : null;

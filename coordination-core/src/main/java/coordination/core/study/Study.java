@@ -125,7 +125,8 @@ public record Study(String name, String title, double voltageKv, double frequenc
         for (StudyCheck c : checks) {
             if (c instanceof CableCheckSpec cc) {
                 scaled.add(new CableCheckSpec(cc.cable(), cc.device(), cc.requirement(),
-                        cc.range().scaled(minFactor, maxFactor), cc.dcOffset(), cc.dcSource(), cc.derived()));
+                        cc.range().scaled(minFactor, maxFactor), cc.dcOffset(), cc.dcSource(), cc.derived(),
+                        cc.faultCase(), cc.conductorShare()));
             } else if (c instanceof GradingCheckSpec g) {
                 scaled.add(new GradingCheckSpec(g.upstream(), g.downstream(), g.requirement(),
                         g.range().scaled(minFactor, maxFactor), g.derived(), g.faultCase(), g.upstreamScale()));
@@ -307,9 +308,30 @@ public record Study(String name, String title, double voltageKv, double frequenc
      * @param dcOffset DC-offset heating, unless switched off
      * @param dcSource where the heating's κ came from
      * @param derived whether the network implied the check (rather than the study's checks list)
+     * @param faultCase empty, or for a fault inside one of a cable's parallel conductors where it lies
+     * @param conductorShare the faulted conductor's share of the device's current (1 for a check of
+     *     the whole cable); with a share below one the check is of one conductor, its range that
+     *     conductor's currents
      */
     public record CableCheckSpec(String cable, String device, MarginRequirement requirement, CurrentRange range,
-            Optional<DcOffset> dcOffset, DcSource dcSource, boolean derived) implements StudyCheck {
+            Optional<DcOffset> dcOffset, DcSource dcSource, boolean derived, String faultCase,
+            double conductorShare) implements StudyCheck {
+        /**
+         * A check of the whole cable.
+         *
+         * @param cable cable id
+         * @param device device id
+         * @param requirement the margin
+         * @param range the fault currents
+         * @param dcOffset DC-offset heating
+         * @param dcSource where its κ came from
+         * @param derived whether the network implied it
+         */
+        public CableCheckSpec(String cable, String device, MarginRequirement requirement, CurrentRange range,
+                Optional<DcOffset> dcOffset, DcSource dcSource, boolean derived) {
+            this(cable, device, requirement, range, dcOffset, dcSource, derived, "", 1.0);
+        }
+
         /**
          * A check written in the study.
          *

@@ -61,9 +61,7 @@ public record StudyReport(Study study, List<CheckResult> results, List<CheckNote
         List<CheckNotes> notes = new ArrayList<>();
         for (Study.StudyCheck c : study.checks()) {
             if (c instanceof Study.CableCheckSpec cc) {
-                results.add(new CableCheck(study.device(cc.device()).referred(), study.cable(cc.cable()).limit(),
-                        cc.range().fromAmps(), cc.range().toAmps(), cc.requirement(), cc.dcOffset().orElse(null))
-                        .result());
+                results.add(cableCheck(study, cc));
             } else if (c instanceof Study.GradingCheckSpec g) {
                 results.add(GradingCheck.check(study.device(g.upstream()).referred().referredBy(1 / g.upstreamScale()),
                         study.device(g.downstream()).referred(), g.range().fromAmps(), g.range().toAmps(),
@@ -75,6 +73,25 @@ public record StudyReport(Study study, List<CheckResult> results, List<CheckNote
         study.network().ifPresent(n -> n.warnings().stream().filter(w -> !StudyNotes.isCableAssumption(w))
                 .forEach(warnings::add));
         return new StudyReport(study, results, notes, warnings);
+    }
+
+    /**
+     * Runs one cable check. A check of one conductor of a parallel group compares that conductor
+     * with the device seen through the conductor's share of its current.
+     *
+     * @param study the study
+     * @param cc the check
+     * @return the result
+     */
+    static coordination.core.margin.CableCheckResult cableCheck(Study study, Study.CableCheckSpec cc) {
+        coordination.core.curve.ProtectiveDevice device = study.device(cc.device()).referred();
+        coordination.core.cable.CableThermalLimit limit = study.cable(cc.cable()).limit();
+        if (cc.conductorShare() != 1.0) {
+            device = device.referredBy(cc.conductorShare());
+            limit = limit.withParallel(1);
+        }
+        return new CableCheck(device, limit, cc.range().fromAmps(), cc.range().toAmps(), cc.requirement(),
+                cc.dcOffset().orElse(null)).result();
     }
 
     /** A device that trips on a current the study says it must ride through does its job badly. */

@@ -158,6 +158,6 @@ class CableCheckTest {
         new com.fasterxml.jackson.databind.ObjectMapper().readTree(text).fieldNames().forEachRemaining(keys::add);
         assertThat(keys, contains("kind", "device", "cable", "pass", "required_margin_s",
                 "range_a", "min_margin_s", "min_margin_at_a", "min_margin_side", "min_ratio", "min_ratio_at_a",
-                "crossings_a", "not_cleared_a", "undefined_a", "methods", "reason", "derived", "assumptions", "warnings"));
+                "crossings_a", "not_cleared_a", "undefined_a", "methods", "reason", "derived", "fault_case", "assumptions", "warnings"));
     }
 }

@@ -202,6 +202,51 @@ class NetworkStudyTest {
                 + " sacrificed for the board\""));
     }
 
+    @Test
+    void aFaultInsideOneOfParallelConductorsIsCheckedAtItsWorstPosition() {
+        // IEC 60364-4-43, 434.4: fed from both ends, the faulted conductor carries more than 1/n
+        Study s = plant("").withFaultFactors(1, 1);
+        Study two = StudyReader.parse("p.yaml", "p", PLANT.replace("CHECKS", "").replace(
+                "{id: C3, conductor: copper, insulation: xlpe, size_mm2: 70,",
+                "{id: C3, conductor: copper, insulation: xlpe, size_mm2: 35, parallel: 2,"));
+        Study.CableCheckSpec worst = two.checks().stream().filter(c -> c instanceof Study.CableCheckSpec cc
+                && !cc.faultCase().isEmpty()).map(c -> (Study.CableCheckSpec) c).findFirst().orElseThrow();
+        assertThat(worst.faultCase(), containsString("one of 2 parallel conductors"));
+        assertThat(worst.conductorShare() > 0.5, is(true));
+        // the whole group sees no more than the bus's I"k3 max; the faulted conductor carries more than half of it
+        FaultLevel msb = two.network().orElseThrow().levels().at("MSB").orElseThrow();
+        assertThat(worst.range().toAmps() <= msb.ik3MaxAmps() * (1 + 1e-9), is(true));
+        // the worst position is no better than equal sharing, checked on the same device and range rules
+        StudyReport r = StudyReport.evaluate(two);
+        CableCheckResult whole = (CableCheckResult) r.results().get(two.checks().indexOf(two.checks().stream()
+                .filter(c -> c instanceof Study.CableCheckSpec cc && cc.cable().equals("C3") && cc.faultCase().isEmpty())
+                .findFirst().orElseThrow()));
+        CableCheckResult one = (CableCheckResult) r.results().get(two.checks().indexOf(worst));
+        assertThat(one.minMarginSeconds() <= whole.minMarginSeconds(), is(true));
+        assertThat(s.checks().stream().noneMatch(c -> c instanceof Study.CableCheckSpec cc
+                && !cc.faultCase().isEmpty()), is(true));
+    }
+
+    @Test
+    void theCurrentDivisionInParallelConductorsIsTheCircuitsOwn() {
+        // IEC 60364-4-43, 434.4; solved here independently as a circuit: n conductors of impedance 1
+        // between S (at 1 V) and F, the fault P at x on the first; KCL at F gives its voltage
+        for (int n = 2; n <= 5; n++) {
+            for (int i = 1; i < 10; i++) {
+                double x = i / 10.0;
+                double vf = (n - 1) / ((n - 1) + 1 / (1 - x));
+                double near = 1 / x;
+                double far = vf / (1 - x);
+                double[] split = Derivation.parallelFault(n, x);
+                assertThat(split[0], closeTo(Math.max(near, far) / (near + far), 1e-12));
+                assertThat(split[1], closeTo(1 / (near + far), 1e-12));
+            }
+            // at the sending end the faulted conductor carries it all, through no impedance
+            assertThat(Derivation.parallelFault(n, 0)[0], closeTo(1, 1e-15));
+            assertThat(Derivation.parallelFault(n, 0)[1], closeTo(0, 1e-15));
+        }
+    }
+
     private static List<String> problems(String yaml) {
         StudyFileException e = assertThrows(StudyFileException.class, () -> StudyReader.parse("bad.yaml", "bad", yaml));
         return e.problems().stream().map(Problem::toString).toList();

@@ -137,8 +137,10 @@ final class CheckCommand implements Callable<Integer> {
             CheckResult o = r.results().get(i);
             double[] crossings = o instanceof CableCheckResult c ? c.crossingsAmps()
                     : ((GradingCheckResult) o).crossingsAmps();
-            String fault = r.study().checks().get(i) instanceof Study.GradingCheckSpec g && !g.faultCase().isEmpty()
-                    ? " (" + g.faultCase() + " fault)" : "";
+            Study.StudyCheck spec = r.study().checks().get(i);
+            String fault = spec instanceof Study.GradingCheckSpec g && !g.faultCase().isEmpty()
+                    ? " (" + g.faultCase() + " fault)" : spec instanceof Study.CableCheckSpec cs && !cs.faultCase()
+                    .isEmpty() ? " (" + cs.faultCase() + ")" : "";
             out.println("  " + (o.pass() ? "pass" : "FAIL") + "  " + describe(o) + fault + ": " + o.reason()
                     + crossings(crossings));
         }

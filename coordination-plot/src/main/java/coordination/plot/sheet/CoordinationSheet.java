@@ -382,6 +382,9 @@ public final class CoordinationSheet {
             if (report.study().checks().get(index) instanceof Study.GradingCheckSpec spec
                     && !spec.faultCase().isEmpty()) {
                 cells[0] = cells[0] + " (" + spec.faultCase() + ")";
+            } else if (report.study().checks().get(index) instanceof Study.CableCheckSpec spec
+                    && !spec.faultCase().isEmpty()) {
+                cells[0] = cells[0] + " (one of its parallel conductors)";
             }
             boolean pass = o.pass();
             g.setFont(Palette.font(Font.PLAIN, 7f));
