@@ -1,9 +1,14 @@
 package coordination.core.internal;
 
+import java.math.BigDecimal;
+import java.math.MathContext;
+import java.math.RoundingMode;
 import java.util.Locale;
 
 /** Argument checks that produce the project's "found ... - must be ..." messages. */
 public final class Checks {
+    private static final MathContext SIX_DIGITS = new MathContext(6, RoundingMode.HALF_UP);
+
     private Checks() {
     }
 
@@ -110,6 +115,11 @@ public final class Checks {
             return Long.toString((long) value);
         }
         double abs = Math.abs(value);
+        if (abs >= 1e-4 && abs < 99999.5) {
+            // what %.6g gives here (half-up on the shortest decimal digits, then no trailing zeros),
+            // without the formatter's and the regular expressions' cost on the derivation's path
+            return new BigDecimal(Double.toString(value)).round(SIX_DIGITS).stripTrailingZeros().toPlainString();
+        }
         if (abs >= 1e-4 && abs < 1e9) {
             String s = String.format(Locale.ROOT, "%.6g", value);
             if (s.contains("e") || s.contains("E")) {

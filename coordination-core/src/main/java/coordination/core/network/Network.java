@@ -204,9 +204,14 @@ public record Network(List<Bus> buses, List<Source> sources, List<Transformer> t
     }
 
     private static String root(Map<String, String> parent, String k) {
+        // path halving keeps the walk short on long radial chains
         String r = k;
-        while (!parent.get(r).equals(r)) {
-            r = parent.get(r);
+        String up = parent.get(r);
+        while (!up.equals(r)) {
+            String grand = parent.get(up);
+            parent.put(r, grand);
+            r = grand;
+            up = parent.get(r);
         }
         return r;
     }

@@ -1,18 +1,32 @@
 package coordination.core.study;
 
+import coordination.core.Quantities;
 import coordination.core.curve.DeviceKind;
+import coordination.core.margin.CableCheck;
 import coordination.core.margin.DcOffset;
 import coordination.core.margin.GradingRequirement;
 import coordination.core.margin.MarginRequirement;
 import coordination.core.network.Bus;
+import coordination.core.network.CableBranch;
 import coordination.core.network.FaultLevel;
 import coordination.core.network.FaultLevels;
 import coordination.core.network.Network;
 import java.util.ArrayList;
+import java.util.HashMap;
+import java.util.HashSet;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
+import java.util.NoSuchElementException;
 import java.util.Optional;
+import java.util.Set;
+import java.util.function.DoubleFunction;
+import java.util.function.DoubleUnaryOperator;
+import org.apache.commons.math3.optim.MaxEval;
+import org.apache.commons.math3.optim.nonlinear.scalar.GoalType;
+import org.apache.commons.math3.optim.univariate.BrentOptimizer;
+import org.apache.commons.math3.optim.univariate.SearchInterval;
+import org.apache.commons.math3.optim.univariate.UnivariateObjectiveFunction;
 
 /**
  * The checks a network implies: every cable against the first device upstream of it, and every
@@ -44,6 +58,9 @@ final class Derivation {
     private final Map<String, List<String>> onBranch = new LinkedHashMap<>();
     private final Map<String, String> deviceBus = new LinkedHashMap<>();
     private final Map<String, Network.Branch> branchById = new LinkedHashMap<>();
+    private final Map<String, Bus> busById;
+    private final Map<String, FaultLevel> levelAt = new HashMap<>();
+    private final Set<Network.Branch> feedingBranches;
 
     /** A derived pair, in study order of discovery. */
     record Pair(String upstream, String downstream) {
@@ -57,6 +74,9 @@ final class Derivation {
         this.studyKv = studyKv;
         this.frequencyHz = frequencyHz;
         this.section = section;
+        this.busById = net.network().busMap();
+        net.levels().levels().forEach(l -> levelAt.putIfAbsent(l.at(), l));
+        this.feedingBranches = new HashSet<>(net.levels().parents().values());
         net.network().branches().forEach(br -> branchById.put(br.id(), br));
         for (Map.Entry<String, Study.Placement> e : net.placements().entrySet()) {
             Network.Branch br = branchById.get(e.getValue().branch());
@@ -74,7 +94,7 @@ final class Derivation {
     }
 
     private Map<String, Bus> buses() {
-        return net.network().busMap();
+        return busById;
     }
 
     /** A position along a path: the branch's index and 0 at its near end, 1 at its far end. */
@@ -111,7 +131,7 @@ final class Derivation {
     }
 
     private List<String> leaves() {
-        java.util.Set<String> feeding = new java.util.HashSet<>();
+        Set<String> feeding = new HashSet<>();
         for (Network.Branch br : levels().parents().values()) {
             feeding.add(nearBus(br));
         }
@@ -151,7 +171,11 @@ final class Derivation {
     }
 
     private FaultLevel at(String bus) {
-        return levels().at(bus).orElseThrow();
+        FaultLevel l = levelAt.get(bus);
+        if (l == null) {
+            throw new NoSuchElementException("no fault level at '" + bus + "'");
+        }
+        return l;
     }
 
     /** The derived cable checks. */
@@ -159,7 +183,7 @@ final class Derivation {
         Map<String, Study.CableCheckSpec> out = new LinkedHashMap<>();
         for (var c : net.network().cables()) {
             Network.Branch br = branchById.get(c.id());
-            if (!levels().parents().containsValue(br)) {
+            if (!feedingBranches.contains(br)) {
                 continue;
             }
             String far = farBus(br);
@@ -209,7 +233,7 @@ final class Derivation {
      * (z/(n−1) + (1−x) z) share the current as B/(A+B) and A/(A+B); the device sees the whole. The
      * worst position is the one of least margin: a scan over x, refined by Brent's method.
      */
-    private Optional<Study.CableCheckSpec> parallelCheck(coordination.core.network.CableBranch c, String device,
+    private Optional<Study.CableCheckSpec> parallelCheck(CableBranch c, String device,
             String from, MarginRequirement req, Optional<DcOffset> dc) {
         int n = c.parallel();
         Bus bus = buses().get(from);
@@ -217,10 +241,10 @@ final class Derivation {
         double[] upMin = levels().impedance(from, false);
         double len = c.lengthM() / 1000;
         double rMax = c.rOhmPerKm() * len;
-        double rMin = c.rOhmPerKm() * len * (1 + coordination.core.network.CableBranch.ALPHA_PER_K
+        double rMin = c.rOhmPerKm() * len * (1 + CableBranch.ALPHA_PER_K
                 * (c.endTemperatureC() - 20));
         double xz = c.xOhmPerKm() * len;
-        java.util.function.DoubleFunction<Study.CableCheckSpec> at = x -> {
+        DoubleFunction<Study.CableCheckSpec> at = x -> {
             double[] split = parallelFault(n, x);
             double share = split[0];
             double parallelPart = split[1];
@@ -231,13 +255,13 @@ final class Derivation {
             return new Study.CableCheckSpec(c.id(), device, req, new Study.CurrentRange(refer(share * iMin, from),
                     refer(share * iMax, from)), dc, Study.DcSource.FROM_NETWORK, true,
                     "fault inside one of " + n + " parallel conductors " + (x < 1e-3 ? "at its sending end"
-                    : x > 1 - 1e-3 ? "at its far end" : "at " + coordination.core.Quantities.significant(x, 3)
+                    : x > 1 - 1e-3 ? "at its far end" : "at " + Quantities.significant(x, 3)
                     + " of its length"), share);
         };
         Study.StudyCable cable = cables.get(c.id());
-        java.util.function.DoubleUnaryOperator margin = x -> {
+        DoubleUnaryOperator margin = x -> {
             Study.CableCheckSpec spec = at.apply(x);
-            double m = new coordination.core.margin.CableCheck(devices.get(device).referred().referredBy(spec
+            double m = new CableCheck(devices.get(device).referred().referredBy(spec
                     .conductorShare()), cable.limit().withParallel(1), spec.range().fromAmps(), spec.range().toAmps(),
                     req, dc.orElse(null)).result().minMarginSeconds();
             return Double.isNaN(m) ? Double.NEGATIVE_INFINITY : m;
@@ -257,11 +281,11 @@ final class Derivation {
         if (Double.isFinite(best)) {
             double lo = Math.max(eps, bestX - 1.0 / steps);
             double hi = Math.min(1 - eps, bestX + 1.0 / steps);
-            var opt = new org.apache.commons.math3.optim.univariate.BrentOptimizer(1e-10, 1e-12);
-            var r = opt.optimize(new org.apache.commons.math3.optim.MaxEval(200),
-                    new org.apache.commons.math3.optim.univariate.UnivariateObjectiveFunction(margin::applyAsDouble),
-                    org.apache.commons.math3.optim.nonlinear.scalar.GoalType.MINIMIZE,
-                    new org.apache.commons.math3.optim.univariate.SearchInterval(lo, hi, bestX));
+            var opt = new BrentOptimizer(1e-10, 1e-12);
+            var r = opt.optimize(new MaxEval(200),
+                    new UnivariateObjectiveFunction(margin::applyAsDouble),
+                    GoalType.MINIMIZE,
+                    new SearchInterval(lo, hi, bestX));
             if (r.getValue() < best) {
                 bestX = r.getPoint();
             }

@@ -321,10 +321,12 @@ final class NetworkSection {
             }
         }
         Map<String, Study.Placement> placed = new LinkedHashMap<>();
+        Map<String, Network.Branch> branches = new java.util.HashMap<>();
+        network.branches().forEach(br -> branches.putIfAbsent(br.id(), br));
         for (Map.Entry<String, Study.Placement> e : placements.entrySet()) {
             Node.MapNode m = placementNodes.get(e.getKey());
             String path = paths.get("device:" + e.getKey());
-            Optional<Network.Branch> branch = network.branch(e.getValue().branch());
+            Optional<Network.Branch> branch = Optional.ofNullable(branches.get(e.getValue().branch()));
             if (branch.isEmpty()) {
                 b.problem(b.value(m, "branch"), path + ".branch", "no cable or transformer is called '"
                         + Binder.echo(e.getValue().branch()) + "'");

@@ -8,41 +8,73 @@ import coordination.core.margin.CheckResult;
 import coordination.core.margin.GradingRequirement;
 import coordination.core.margin.ThermalRegion;
 import java.util.ArrayList;
+import java.util.HashMap;
 import java.util.List;
+import java.util.Map;
 import java.util.Optional;
 
 /** The assumptions each check rests on and the warnings its context gives, for the report and the sheet. */
 final class StudyNotes {
-    private StudyNotes() {
+    private final Study study;
+    private final Map<String, Study.StudyDevice> devices = new HashMap<>();
+    private final Map<String, Study.StudyCable> cables = new HashMap<>();
+    /** The network's assumptions about each cable's impedance, by the cable's note prefix. */
+    private final Map<String, List<Note>> cableAssumptions = new HashMap<>();
+    private final List<Note> busFactors = new ArrayList<>();
+    private final Map<String, List<Study.CableCheckSpec>> cableChecksByDevice = new HashMap<>();
+
+    /** Indexes a study once, so that notes for many checks cost no repeated searches. */
+    StudyNotes(Study study) {
+        this.study = study;
+        study.devices().forEach(d -> devices.putIfAbsent(d.id(), d));
+        study.cables().forEach(c -> cables.putIfAbsent(c.id(), c));
+        study.network().ifPresent(n -> n.warnings().forEach(w -> {
+            if (w.code().equals("bus-voltage-factors-assumed")) {
+                busFactors.add(w);
+            }
+            // under every prefix that ends at a colon, since an id may hold one
+            for (int colon = w.message().indexOf(':'); isCableAssumption(w) && colon > 0;
+                    colon = w.message().indexOf(':', colon + 1)) {
+                cableAssumptions.computeIfAbsent(w.message().substring(0, colon), k -> new ArrayList<>()).add(w);
+            }
+        }));
+        for (Study.StudyCheck c : study.checks()) {
+            if (c instanceof Study.CableCheckSpec cc) {
+                cableChecksByDevice.computeIfAbsent(cc.device(), k -> new ArrayList<>()).add(cc);
+            }
+        }
     }
 
-    static StudyReport.CheckNotes of(Study study, Study.StudyCheck spec, CheckResult result) {
+    private Study.StudyDevice device(String id) {
+        Study.StudyDevice d = devices.get(id);
+        return d != null ? d : study.device(id);
+    }
+
+    StudyReport.CheckNotes of(Study.StudyCheck spec, CheckResult result) {
         List<Note> assumptions = new ArrayList<>();
         List<Note> warnings = new ArrayList<>();
         if (spec instanceof Study.CableCheckSpec c) {
-            cable(study, c, (CableCheckResult) result, assumptions);
+            cable(c, (CableCheckResult) result, assumptions);
         } else if (spec instanceof Study.GradingCheckSpec g) {
-            assumptions.addAll(study.device(g.upstream()).assumptions());
-            for (Note n : study.device(g.downstream()).assumptions()) {
+            assumptions.addAll(device(g.upstream()).assumptions());
+            for (Note n : device(g.downstream()).assumptions()) {
                 if (!assumptions.contains(n)) {
                     assumptions.add(n);
                 }
             }
-            grading(study, g, warnings);
+            grading(g, warnings);
         }
         // the currents of a check the network gives rest on its buses' voltage factors
         boolean derivedRange = spec instanceof Study.CableCheckSpec cc && cc.dcSource() == Study.DcSource.FROM_NETWORK
                 || spec instanceof Study.GradingCheckSpec gs && gs.derived();
         if (derivedRange) {
-            study.network().ifPresent(n -> n.warnings().stream()
-                    .filter(w -> w.code().equals("bus-voltage-factors-assumed") && !assumptions.contains(w))
-                    .forEach(assumptions::add));
+            busFactors.stream().filter(w -> !assumptions.contains(w)).forEach(assumptions::add);
         }
         return new StudyReport.CheckNotes(assumptions, warnings);
     }
 
-    private static void cable(Study study, Study.CableCheckSpec c, CableCheckResult r, List<Note> out) {
-        Study.StudyCable cable = study.cable(c.cable());
+    private void cable(Study.CableCheckSpec c, CableCheckResult r, List<Note> out) {
+        Study.StudyCable cable = cables.containsKey(c.cable()) ? cables.get(c.cable()) : study.cable(c.cable());
         CableThermalLimit l = cable.limit();
         String who = "cable '" + l.id() + "'";
         if (cable.initialSource() == Study.TemperatureSource.INSULATION_DEFAULT) {
@@ -64,10 +96,9 @@ final class StudyNotes {
             out.add(new Note("outside-iec-60949", who + ": beyond 5 s, outside IEC 60949's scope, no heat loss is"
                     + " credited; the cable withstands 5 s or its adiabatic time, whichever is longer"));
         }
-        out.addAll(study.device(c.device()).assumptions());
+        out.addAll(device(c.device()).assumptions());
         // the network's defaults for this cable's impedance decide its fault range
-        study.network().ifPresent(n -> n.warnings().stream().filter(w -> isCableAssumption(w)
-                && w.message().startsWith(who + ":")).forEach(out::add));
+        out.addAll(cableAssumptions.getOrDefault(who, List.of()));
     }
 
     /** Whether a network note is an assumption about a cable's impedance rather than a warning. */
@@ -76,18 +107,17 @@ final class StudyNotes {
                 || n.code().equals("bus-voltage-factors-assumed");
     }
 
-    private static void grading(Study study, Study.GradingCheckSpec g, List<Note> out) {
-        for (Study.StudyCheck other : study.checks()) {
-            if (other instanceof Study.CableCheckSpec c && c.device().equals(g.downstream())
-                    && (c.range().fromAmps() < g.range().fromAmps() || c.range().toAmps() > g.range().toAmps())) {
+    private void grading(Study.GradingCheckSpec g, List<Note> out) {
+        for (Study.CableCheckSpec c : cableChecksByDevice.getOrDefault(g.downstream(), List.of())) {
+            if ((c.range().fromAmps() < g.range().fromAmps() || c.range().toAmps() > g.range().toAmps())) {
                 out.add(new Note("grading-range-narrower", "the grading range " + ka(g.range()) + " is narrower than"
                         + " the " + ka(c.range()) + " of cable '" + c.cable() + "' below '" + g.downstream()
                         + "': selectivity outside it is not checked"));
             }
         }
         if (g.requirement() instanceof GradingRequirement.RatingRatio) {
-            Optional<Fuse> up = fuse(study, g.upstream());
-            Optional<Fuse> down = fuse(study, g.downstream());
+            Optional<Fuse> up = fuse(g.upstream());
+            Optional<Fuse> down = fuse(g.downstream());
             boolean oneGgSeries = up.isPresent() && down.isPresent()
                     && up.get().category().equals(Optional.of("gG")) && down.get().category().equals(Optional.of("gG"))
                     && up.get().series().isPresent() && up.get().series().equals(down.get().series());
@@ -99,8 +129,8 @@ final class StudyNotes {
         }
     }
 
-    private static Optional<Fuse> fuse(Study study, String id) {
-        return study.device(id).device() instanceof Fuse f ? Optional.of(f) : Optional.empty();
+    private Optional<Fuse> fuse(String id) {
+        return device(id).device() instanceof Fuse f ? Optional.of(f) : Optional.empty();
     }
 
     private static String ka(Study.CurrentRange r) {

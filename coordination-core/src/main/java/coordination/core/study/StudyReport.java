@@ -59,6 +59,7 @@ public record StudyReport(Study study, List<CheckResult> results, List<CheckNote
     public static StudyReport evaluate(Study study) {
         List<CheckResult> results = new ArrayList<>();
         List<CheckNotes> notes = new ArrayList<>();
+        StudyNotes noting = new StudyNotes(study);
         for (Study.StudyCheck c : study.checks()) {
             if (c instanceof Study.CableCheckSpec cc) {
                 results.add(cableCheck(study, cc));
@@ -67,7 +68,7 @@ public record StudyReport(Study study, List<CheckResult> results, List<CheckNote
                         study.device(g.downstream()).referred(), g.range().fromAmps(), g.range().toAmps(),
                         g.requirement()));
             }
-            notes.add(StudyNotes.of(study, c, results.get(results.size() - 1)));
+            notes.add(noting.of(c, results.get(results.size() - 1)));
         }
         List<Note> warnings = new ArrayList<>(rideThrough(study));
         study.network().ifPresent(n -> n.warnings().stream().filter(w -> !StudyNotes.isCableAssumption(w))
