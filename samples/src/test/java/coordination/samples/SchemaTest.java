@@ -30,7 +30,7 @@ class SchemaTest {
 
     static Stream<Path> studies() throws Exception {
         try (Stream<Path> corpus = Files.list(Path.of("../spec/cases/valid"))) {
-            return Stream.concat(SamplesTest.studies(),
+            return Stream.concat(Stream.concat(SamplesTest.studies(), Stream.of(Path.of("large/network-200.yaml"))),
                     corpus.filter(p -> p.toString().endsWith(".yaml")).sorted().toList().stream());
         }
     }
