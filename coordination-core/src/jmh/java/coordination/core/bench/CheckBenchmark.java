@@ -48,6 +48,12 @@ public class CheckBenchmark {
         return GradingCheck.check(incomer, feeder, 1500, 6000, GradingRequirement.intervalSeconds(0.3));
     }
 
+    /** @return the exact grading check over a range where both curves are flat above 10 kA */
+    @Benchmark
+    public GradingCheckResult gradingCheckWide() {
+        return GradingCheck.check(incomer, feeder, 1500, 12000, GradingRequirement.intervalSeconds(0.3));
+    }
+
     /** @return the minimum margin found by sampling 10,000 log-spaced currents */
     @Benchmark
     public double sampledCableCheck10k() {

@@ -130,6 +130,11 @@ public final class LogAxis {
             if (!belowLeft || !belowRight || last == 0) {
                 continue;
             }
+            // inside a run of equal samples the function is flat: Brent there finds nothing lower,
+            // and a curve's constant stretches made every such sample a minimum to refine
+            if (i > 0 && i < last && vs[i] == vs[i - 1] && vs[i] == vs[i + 1]) {
+                continue;
+            }
             if (i == 0 || i == last) {
                 int inner = i == 0 ? 1 : last - 1;
                 double probe = xs[i] + (xs[inner] - xs[i]) * 1e-6;
