@@ -56,7 +56,7 @@ class CliTest {
         Path out = tmp.resolve("out");
         InProcess.Run r = run("sheet", bad.toString(), "-o", out.toString());
         assertThat(r.code(), is(ExitCodes.BAD_INPUT));
-        assertEquals(bad + ":26:45: devices[0].stages[0].pickup_a: expected a number, found 'lots'\n", r.err());
+        assertEquals(bad + ":27:45: devices[0].stages[0].pickup_a: expected a number, found 'lots'\n", r.err());
         assertThat(Files.exists(out) ? files(out).size() : 0, is(0));
     }
 
