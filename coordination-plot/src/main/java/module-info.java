@@ -8,7 +8,8 @@ module coordination.plot {
     requires transitive coordination.core;
     requires transitive java.desktop;
     requires transitive xchart;
-    requires org.jfree.svg;
+    requires org.apache.xmlgraphics.batik.svggen;
+    requires java.xml;
     requires de.rototor.pdfbox.graphics2d;
     requires org.apache.pdfbox;
     requires org.apache.fontbox;

@@ -10,6 +10,7 @@ import java.awt.RenderingHints;
 import java.awt.image.BufferedImage;
 import java.io.ByteArrayOutputStream;
 import java.io.IOException;
+import java.io.StringWriter;
 import java.nio.charset.StandardCharsets;
 import java.security.MessageDigest;
 import java.security.NoSuchAlgorithmException;
@@ -20,6 +21,14 @@ import java.util.Locale;
 import java.util.Optional;
 import java.util.TimeZone;
 import java.util.function.Consumer;
+import javax.xml.parsers.DocumentBuilderFactory;
+import javax.xml.parsers.ParserConfigurationException;
+import javax.xml.transform.OutputKeys;
+import javax.xml.transform.Transformer;
+import javax.xml.transform.TransformerException;
+import javax.xml.transform.TransformerFactory;
+import javax.xml.transform.dom.DOMSource;
+import javax.xml.transform.stream.StreamResult;
 import org.apache.pdfbox.cos.COSArray;
 import org.apache.pdfbox.cos.COSName;
 import org.apache.pdfbox.cos.COSString;
@@ -29,9 +38,10 @@ import org.apache.pdfbox.pdmodel.PDPage;
 import org.apache.pdfbox.pdmodel.PDPageContentStream;
 import org.apache.pdfbox.pdmodel.common.PDRectangle;
 import org.apache.pdfbox.pdmodel.graphics.form.PDFormXObject;
-import org.jfree.svg.SVGGraphics2D;
-import org.jfree.svg.SVGUnits;
-import org.jfree.svg.ViewBox;
+import org.apache.batik.svggen.SVGGeneratorContext;
+import org.apache.batik.svggen.SVGGraphics2D;
+import org.w3c.dom.Document;
+import org.w3c.dom.Element;
 
 /**
  * Renders a painting, given in points (1/72 in), to SVG, PNG or PDF bytes. The output depends on
@@ -102,21 +112,45 @@ public final class Drawing {
     }
 
     private static byte[] svg(double w, double h, Consumer<Graphics2D> painter) throws IOException {
-        // the page in points, so that it prints at its size; the viewBox below maps one point to one user unit
-        SVGGraphics2D g = new SVGGraphics2D(w, h, SVGUnits.PT);
-        // a fixed prefix for clip and gradient ids: the default one is derived from the clock
-        g.setDefsKeyPrefix("c");
+        Document doc;
+        try {
+            doc = DocumentBuilderFactory.newInstance().newDocumentBuilder().getDOMImplementation()
+                    .createDocument(SVG_NS, "svg", null);
+        } catch (ParserConfigurationException e) {
+            throw new IllegalStateException("the platform's XML parser cannot create a document", e);
+        }
+        SVGGeneratorContext ctx = SVGGeneratorContext.createDefault(doc);
+        ctx.setComment(null);
         // a hundredth of a point is far below what any viewer shows, and halves the document
-        g.setGeomDoubleConverter(Drawing::twoDecimals);
+        ctx.setPrecision(2);
+        // text as text, in the faces SvgFonts embeds
+        ctx.setEmbeddedFontsOn(false);
+        SVGGraphics2D g = new SVGGraphics2D(ctx, false);
         hints(g);
         painter.accept(g);
+        Element root = g.getRoot();
+        // the page in points, so that it prints at its size; the viewBox maps one point to one user unit,
+        // so that a browser scales the page to its window
+        root.setAttribute("width", number(w) + "pt");
+        root.setAttribute("height", number(h) + "pt");
+        root.setAttribute("viewBox", "0 0 " + number(w) + " " + number(h));
         g.dispose();
-        // a viewBox, so that a browser scales the page to its window; the width and height stay in points
-        String svg = "<?xml version=\"1.0\"?>\n" + g.getSVGElement(null, true, new ViewBox(0, 0, w, h), null, null);
-        return SvgFonts.embed(svg).getBytes(StandardCharsets.UTF_8);
+        // the platform's serializer, not the generator's own writer: one element per tag without line
+        // breaks inside tags, and no document type that a browser would fetch
+        StringWriter out = new StringWriter();
+        try {
+            Transformer t = TransformerFactory.newInstance().newTransformer();
+            t.setOutputProperty(OutputKeys.ENCODING, "UTF-8");
+            t.transform(new DOMSource(root), new StreamResult(out));
+        } catch (TransformerException e) {
+            throw new IOException("SVG: the document could not be written: " + e.getMessage(), e);
+        }
+        return SvgFonts.embed(out.toString()).getBytes(StandardCharsets.UTF_8);
     }
 
-    private static String twoDecimals(double v) {
+    private static final String SVG_NS = "http://www.w3.org/2000/svg";
+
+    private static String number(double v) {
         double r = Math.round(v * 100) / 100.0;
         return r == Math.rint(r) ? Long.toString((long) r) : Double.toString(r);
     }

@@ -150,8 +150,10 @@ class SheetRenderTest {
         Study s = StudyReader.read(file);
         CoordinationSheet sheet = new CoordinationSheet(s, StudyReport.evaluate(s));
         String svg = new String(sheet.render(OutputFormat.SVG, 150), java.nio.charset.StandardCharsets.UTF_8);
-        assertThat(svg, containsString("viewBox='0 0 " + (long) sheet.widthPoints() + " " + (long) sheet.heightPoints()
-                + "'"));
+        assertThat(svg, containsString("viewBox=\"0 0 " + (long) sheet.widthPoints() + " " + (long) sheet.heightPoints()
+                + "\""));
+        // printed at its size: the page is given in points
+        assertThat(svg, containsString("width=\"" + (long) sheet.widthPoints() + "pt\""));
         assertThat(svg, containsString(">1 kA</text>"));
         assertThat(svg, containsString(">Time (s)</text>"));
         assertThat(svg, containsString("@font-face"));

@@ -1,0 +1,37 @@
+package coordination.core.study;
+
+import java.io.IOException;
+import java.io.InputStream;
+import java.io.UncheckedIOException;
+import java.nio.charset.StandardCharsets;
+
+/**
+ * The JSON Schemas of the study file and of the report, as shipped in this jar: the same files as
+ * {@code spec/study.schema.json} and {@code spec/report.schema.json}, for tools that validate
+ * without the repository at hand.
+ */
+public final class Schemas {
+    private Schemas() {
+    }
+
+    /** @return the study-file schema (JSON Schema draft 2020-12), as text */
+    public static String study() {
+        return read("study.schema.json");
+    }
+
+    /** @return the report schema (JSON Schema draft 2020-12), as text */
+    public static String report() {
+        return read("report.schema.json");
+    }
+
+    private static String read(String name) {
+        try (InputStream in = Schemas.class.getResourceAsStream(name)) {
+            if (in == null) {
+                throw new IllegalStateException("the jar lacks " + name + ": a broken build");
+            }
+            return new String(in.readAllBytes(), StandardCharsets.UTF_8);
+        } catch (IOException e) {
+            throw new UncheckedIOException(e);
+        }
+    }
+}
