@@ -42,6 +42,14 @@ public record CableThermalLimit(String id, ConductorMaterial material, Insulatio
     /**
      * Validates the cable.
      *
+     * @param id identifier
+     * @param material conductor material
+     * @param insulation insulation type
+     * @param sizeMm2 cross-section of one conductor in mm², above 0
+     * @param parallel conductors in parallel per phase, 1 or more
+     * @param initialCelsius conductor temperature when the fault starts, °C
+     * @param finalCelsius permitted conductor temperature at the end of the fault, °C, above the initial
+     * @param method how the limit is computed
      * @throws IllegalArgumentException if the size, parallel count or temperatures are out of range
      */
     public CableThermalLimit {

@@ -39,6 +39,8 @@ public record WithstandTable(List<Row> rows, double[] timesSeconds) {
     /**
      * Validates the table.
      *
+     * @param rows one row per conductor size, in the order given
+     * @param timesSeconds fault durations in seconds, each above 0
      * @throws IllegalArgumentException if there is no row, or a duration is not above 0
      */
     public WithstandTable {
@@ -52,6 +54,7 @@ public record WithstandTable(List<Row> rows, double[] timesSeconds) {
         }
     }
 
+    /** @return the durations in seconds, a copy */
     @Override
     public double[] timesSeconds() {
         return timesSeconds.clone();

@@ -24,6 +24,15 @@ public record BandDevice(String id, DeviceKind kind, TimeCurrentCurve minimumCur
     /**
      * Validates that nothing is missing.
      *
+     * @param id identifier
+     * @param kind kind of device
+     * @param minimumCurve fastest curve
+     * @param maximumCurve slowest, total-clearing curve
+     * @param slowestOperatingCurve slowest operating curve (a relay's, without its breaker)
+     * @param letThrough stated total let-through energy, or empty
+     * @param letThroughFromAmps lowest prospective current at which the let-through applies, amperes
+     * @param preArcing stated pre-arcing energy, or empty
+     * @param source the device as set, before referral
      * @throws IllegalArgumentException if a part is null or the let-through start is negative
      */
     public BandDevice {

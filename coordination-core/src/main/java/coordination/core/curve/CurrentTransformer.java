@@ -13,6 +13,8 @@ public record CurrentTransformer(double primaryAmps, double secondaryAmps) {
     /**
      * Validates the ratings.
      *
+     * @param primaryAmps rated primary current in amperes, above 0
+     * @param secondaryAmps rated secondary current in amperes, above 0 (commonly 1 A or 5 A)
      * @throws IllegalArgumentException if a rating is not a positive finite number
      */
     public CurrentTransformer {

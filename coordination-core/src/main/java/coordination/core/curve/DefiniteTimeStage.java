@@ -26,6 +26,11 @@ public record DefiniteTimeStage(double pickupAmps, double delaySeconds, double f
     /**
      * Validates the settings.
      *
+     * @param pickupAmps pickup current in amperes, above 0
+     * @param delaySeconds operating time in seconds, 0 or more; the slowest where a band is assumed
+     * @param fastestDelaySeconds the fastest operating time in seconds, at most {@code delaySeconds}; equal to it when
+     *     the time is stated
+     * @param instantaneous whether this is an instantaneous stage (for labels only)
      * @throws IllegalArgumentException if the pickup is not above 0, a delay is negative, or the
      *     fastest delay exceeds the delay
      */

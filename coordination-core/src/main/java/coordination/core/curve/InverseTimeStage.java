@@ -39,6 +39,17 @@ public record InverseTimeStage(
     /**
      * Validates the parameters.
      *
+     * @param aSeconds constant A in seconds, above 0
+     * @param bSeconds constant B in seconds, 0 or more
+     * @param exponent exponent p, above 0
+     * @param resetConstantSeconds reset constant tr in seconds, or NaN if none
+     * @param pickupAmps pickup current Ip in amperes, above 0
+     * @param multiplier time multiplier setting (TMS) or time dial (TD), above 0
+     * @param multiplierKind whether the multiplier is a TMS or a time dial
+     * @param multiplierRange the settings the relay offers for the multiplier
+     * @param highCurrent behaviour above {@code upperMultiple * Ip}
+     * @param upperMultiple multiple of pickup above which {@code highCurrent} applies, above 1
+     * @param label a name for messages, e.g. the family key
      * @throws IllegalArgumentException if a constant or setting is out of its range
      */
     public InverseTimeStage {

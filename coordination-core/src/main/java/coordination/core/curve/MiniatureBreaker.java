@@ -44,6 +44,11 @@ public record MiniatureBreaker(String id, McbType type, double ratedAmps, double
     /**
      * Validates the settings.
      *
+     * @param id identifier
+     * @param type the instantaneous tripping type
+     * @param ratedAmps rated current In in amperes, above 0
+     * @param fastestSeconds fastest clearing time in the instantaneous region, from 0 to 0.1 s
+     * @param letThrough the maker's let-through energy against prospective current, or empty
      * @throws IllegalArgumentException if a parameter is out of range
      */
     public MiniatureBreaker {

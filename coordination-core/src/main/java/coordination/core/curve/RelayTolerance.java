@@ -20,6 +20,9 @@ public record RelayTolerance(double timeFraction, double timeMinSeconds, double 
     /**
      * Validates the tolerance.
      *
+     * @param timeFraction the operate-time error as a fraction of the theoretical time, from 0 to below 1
+     * @param timeMinSeconds the smallest operate-time error in seconds, 0 or more
+     * @param pickupFraction the start-value error as a fraction of the setting, from 0 to below 1
      * @throws IllegalArgumentException if a fraction lies outside [0, 0.5] or the time is negative
      */
     public RelayTolerance {

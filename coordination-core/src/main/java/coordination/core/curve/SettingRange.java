@@ -14,6 +14,9 @@ public record SettingRange(double min, double max, double step) {
     /**
      * Validates the range.
      *
+     * @param min smallest setting, a finite number above 0
+     * @param max largest setting, at or above {@code min}
+     * @param step the setting's resolution, a finite number above 0: settings are whole multiples of it
      * @throws IllegalArgumentException if an end or the step is not a positive finite number, or max is below min
      */
     public SettingRange {

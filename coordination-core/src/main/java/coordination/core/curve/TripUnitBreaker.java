@@ -54,6 +54,18 @@ public record TripUnitBreaker(String id, Settings settings) implements Protectiv
         /**
          * Validates the settings.
          *
+         * @param irAmps long-time pickup Ir in amperes, above 0
+         * @param trSeconds long-time delay at 6 Ir in seconds, above 0
+         * @param isdAmps short-time pickup Isd in amperes, or infinity for none
+         * @param tsdSeconds short-time delay in seconds, 0 or more
+         * @param shortTimeI2t whether the short-time I²t ramp is on
+         * @param iiAmps instantaneous pickup Ii in amperes, or infinity for none
+         * @param instantaneousMinSeconds fastest instantaneous clearing time in seconds
+         * @param instantaneousMaxSeconds slowest instantaneous clearing time in seconds
+         * @param longTimeLowMultiple lower edge of the long-time pickup band as a multiple of Ir
+         * @param longTimeHighMultiple upper edge of the long-time pickup band as a multiple of Ir
+         * @param pickupTolerance relative tolerance of Isd and Ii, from 0 to below 1
+         * @param timeTolerance relative tolerance of tr and tsd, from 0 to below 1
          * @throws IllegalArgumentException if a setting is out of range
          */
         public Settings {
@@ -107,6 +119,8 @@ public record TripUnitBreaker(String id, Settings settings) implements Protectiv
     /**
      * Validates the parts.
      *
+     * @param id identifier
+     * @param settings the trip unit's settings
      * @throws IllegalArgumentException if a part is missing
      */
     public TripUnitBreaker {

@@ -40,6 +40,14 @@ public record TripUnitCurve(
     /**
      * Validates the settings.
      *
+     * @param longTimePickupAmps long-time pickup in amperes, above 0
+     * @param longTimeI2tA2s long-time constant I²t in A²s, above 0
+     * @param shortTimePickupAmps short-time pickup in amperes, or infinity for none
+     * @param shortTimeSeconds short-time flat delay in seconds, 0 or more
+     * @param shortTimeRampI2tA2s short-time ramp I²t in A²s, or NaN for a flat delay
+     * @param instantaneousPickupAmps instantaneous pickup in amperes, or infinity for none
+     * @param instantaneousSeconds instantaneous clearing time in seconds, 0 or more
+     * @param label a name for messages
      * @throws IllegalArgumentException if a setting is out of its range
      */
     public TripUnitCurve {

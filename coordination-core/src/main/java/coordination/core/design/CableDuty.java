@@ -25,6 +25,11 @@ public record CableDuty(CableThermalLimit cable, double fromAmps, double toAmps,
     /**
      * Validates the duty.
      *
+     * @param cable the cable
+     * @param fromAmps lowest prospective fault current in amperes
+     * @param toAmps highest prospective fault current in amperes
+     * @param requirement the margin
+     * @param dcOffset the DC-offset heating, unless left out
      * @throws IllegalArgumentException if a part is missing or the range is invalid
      */
     public CableDuty {

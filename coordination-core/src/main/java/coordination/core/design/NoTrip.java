@@ -13,6 +13,8 @@ public record NoTrip(double currentAmps, double seconds) {
     /**
      * Validates the point.
      *
+     * @param currentAmps current in primary amperes at the relay's voltage, above 0
+     * @param seconds how long, in seconds, above 0
      * @throws IllegalArgumentException if a value is not positive and finite
      */
     public NoTrip {

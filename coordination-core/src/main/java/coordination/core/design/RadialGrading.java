@@ -52,6 +52,17 @@ public final class RadialGrading {
         /**
          * Validates the link.
          *
+         * @param relay the relay; its first inverse-time stage's multiplier is chosen
+         * @param referFactor current scale to the chain's common voltage base
+         * @param cable the cable check on this relay, if there is one
+         * @param interval the interval over the chain's relay below (ignored for the most downstream relay)
+         * @param gradingFromAmps lowest current over which this relay grades with the one below, in amperes on the
+         *     common base (ignored for the most downstream relay)
+         * @param gradingToAmps highest such current
+         * @param noTrip currents the relay must ride through, primary amperes at its own voltage
+         * @param fixedBelow devices outside the chain (breakers, fuses, relays as set) that this relay must also grade
+         *     over, each with its own check's range and requirement
+         * @param fixedAbove devices outside the chain that must grade over this relay
          * @throws IllegalArgumentException if a part is missing or a number is out of range
          */
         public Link {
@@ -95,6 +106,10 @@ public final class RadialGrading {
         /**
          * Validates the device.
          *
+         * @param device the device, referred to the chain's common base
+         * @param fromAmps lowest current of the grading check, amperes on the common base
+         * @param toAmps highest current
+         * @param requirement the check's requirement
          * @throws IllegalArgumentException if a part is missing or the range is empty
          */
         public Fixed {
@@ -144,7 +159,22 @@ public final class RadialGrading {
     public record Setting(String id, MultiplierKind kind, SettingRange range, double currentMultiplier, OptionalDouble exact,
             OptionalDouble proposed, Binding binding, Optional<String> bindingDevice,
             List<GradingCheckResult> gradings, Optional<CableCheckResult> cable, Optional<String> problem) {
-        /** Copies the list in. */
+        /**
+         * Copies the list in.
+         *
+         * @param id relay id
+         * @param kind TMS or time dial
+         * @param range the multiplier's settings
+         * @param currentMultiplier the multiplier as set
+         * @param exact the smallest multiplier meeting every lower bound, unrounded, or empty if none in range
+         * @param proposed the exact value rounded up to the relay's step, or empty if none in range
+         * @param binding which lower bound decides
+         * @param bindingDevice the device below whose interval decides, with {@link Binding#GRADING}
+         * @param gradings the gradings at the proposal: over the chain's relay below first (none for the most
+         *     downstream), then over each fixed device below, then under each fixed device above
+         * @param cable the cable check at the proposal, or empty without a cable
+         * @param problem what cannot be met, or empty
+         */
         public Setting {
             gradings = List.copyOf(gradings);
         }

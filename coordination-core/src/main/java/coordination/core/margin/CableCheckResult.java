@@ -49,7 +49,28 @@ public record CableCheckResult(
         double undefinedToAmps,
         List<ThermalRegion> regions) implements CheckResult {
 
-    /** Copies the arrays and lists in. */
+    /**
+     * Copies the arrays and lists in.
+     *
+     * @param device device id
+     * @param cable cable id
+     * @param fromAmps lower end of the range in amperes
+     * @param toAmps upper end of the range in amperes
+     * @param requirement the margin asked for
+     * @param pass whether the device protects the cable over the whole range with that margin
+     * @param minMarginSeconds minimum of t_cable - t_device in seconds, NaN if it clears nowhere
+     * @param minMarginAtAmps current of that minimum in amperes
+     * @param minMarginSide side of {@code minMarginAtAmps} on which it occurs
+     * @param minRatio minimum of t_cable / t_device, NaN if it clears nowhere
+     * @param minRatioAtAmps current of that minimum in amperes
+     * @param minRatioSide side of {@code minRatioAtAmps} on which it occurs
+     * @param crossingsAmps currents where the device curve crosses the damage curve, ascending
+     * @param notClearedFromAmps lowest current of the range at which the device does not clear, or NaN
+     * @param notClearedToAmps highest such current, or NaN
+     * @param undefinedFromAmps lowest current at which the device curve has no value, or NaN
+     * @param undefinedToAmps highest such current, or NaN
+     * @param regions the method used in each part of the range
+     */
     public CableCheckResult {
         crossingsAmps = crossingsAmps.clone();
         regions = List.copyOf(regions);

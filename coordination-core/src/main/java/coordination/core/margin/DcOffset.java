@@ -47,6 +47,8 @@ public record DcOffset(double kappa, double frequencyHz) {
     /**
      * Validates the parameters.
      *
+     * @param kappa peak factor κ of the fault current, above 1 and at most 2
+     * @param frequencyHz system frequency in Hz, above 0
      * @throws IllegalArgumentException if κ is not in (1, 2] or the frequency is not above 0
      */
     public DcOffset {

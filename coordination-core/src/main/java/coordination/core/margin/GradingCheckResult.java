@@ -51,7 +51,31 @@ public record GradingCheckResult(
         double undefinedFromAmps,
         double undefinedToAmps) implements CheckResult {
 
-    /** Copies the array in. */
+    /**
+     * Copies the array in.
+     *
+     * @param upstream upstream device id
+     * @param downstream downstream device id
+     * @param fromAmps lower end of the range in amperes
+     * @param toAmps upper end of the range in amperes
+     * @param requirement what was asked
+     * @param toOperatingTime whether the interval was measured to the downstream relay's operating time (two relays)
+     *     rather than to the downstream device's clearing time
+     * @param pass whether the pair grades as asked over the whole range
+     * @param minIntervalSeconds minimum of (upstream minimum - downstream maximum) in seconds, negative infinity where
+     *     the upstream device operates and the downstream one does not, NaN if neither operates anywhere
+     * @param minIntervalAtAmps current of that minimum in amperes
+     * @param minIntervalSide side of {@code minIntervalAtAmps} on which it occurs
+     * @param crossingsAmps currents where the two curves cross (selectivity is lost beyond), ascending
+     * @param ratingRatio upstream rating over downstream rating for fuse pairs, or NaN
+     * @param minEnergyRatio where the pair is graded by energy, the minimum of the upstream fuse's pre-arcing I²t over
+     *     the downstream device's let-through I²t; NaN where it is not
+     * @param minEnergyRatioAtAmps current of that minimum in amperes, or NaN
+     * @param energyFromAmps lowest current graded by energy, or NaN
+     * @param energyToAmps highest such current, or NaN
+     * @param undefinedFromAmps lowest current at which a curve has no value, or NaN
+     * @param undefinedToAmps highest such current, or NaN
+     */
     public GradingCheckResult {
         crossingsAmps = crossingsAmps.clone();
     }

@@ -61,7 +61,14 @@ public sealed interface GradingRequirement {
      *     its operating time
      */
     record Interval(double seconds, boolean toClearingTime) implements GradingRequirement {
-        /** @throws IllegalArgumentException if negative */
+        /**
+         * Validates the interval.
+         *
+         * @param seconds required interval in seconds, 0 or more
+         * @param toClearingTime whether a downstream relay is taken at its clearing time rather than
+         *     its operating time
+         * @throws IllegalArgumentException if negative
+         */
         public Interval {
             Checks.nonNegative("required interval", seconds, "s");
         }
@@ -78,7 +85,12 @@ public sealed interface GradingRequirement {
      * @param ratio required ratio, 1 or more
      */
     record RatingRatio(double ratio) implements GradingRequirement {
-        /** @throws IllegalArgumentException if below 1 */
+        /**
+         * Validates the ratio.
+         *
+         * @param ratio required ratio, 1 or more
+         * @throws IllegalArgumentException if below 1
+         */
         public RatingRatio {
             Checks.inRange("required rating ratio", ratio, 1.0, 1000.0, "");
         }

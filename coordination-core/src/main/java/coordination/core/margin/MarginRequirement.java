@@ -43,7 +43,12 @@ public sealed interface MarginRequirement {
      * @param seconds required margin in seconds, 0 or more
      */
     record Seconds(double seconds) implements MarginRequirement {
-        /** @throws IllegalArgumentException if the margin is negative */
+        /**
+         * Validates the margin.
+         *
+         * @param seconds required margin in seconds, 0 or more
+         * @throws IllegalArgumentException if the margin is negative
+         */
         public Seconds {
             Checks.nonNegative("required margin", seconds, "s");
         }
@@ -65,7 +70,12 @@ public sealed interface MarginRequirement {
      * @param ratio required ratio, 1 or more
      */
     record Ratio(double ratio) implements MarginRequirement {
-        /** @throws IllegalArgumentException if the ratio is below 1 */
+        /**
+         * Validates the ratio.
+         *
+         * @param ratio required ratio, 1 or more
+         * @throws IllegalArgumentException if the ratio is below 1
+         */
         public Ratio {
             Checks.inRange("required margin ratio", ratio, 1.0, 1e6, "");
         }

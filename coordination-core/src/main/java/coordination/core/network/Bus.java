@@ -15,6 +15,10 @@ public record Bus(String id, double voltageKv, double cMax, double cMin) {
     /**
      * Validates the bus.
      *
+     * @param id the bus's id
+     * @param voltageKv nominal voltage Un in kV
+     * @param cMax voltage factor for maximum currents
+     * @param cMin voltage factor for minimum currents
      * @throws IllegalArgumentException if a value is missing or out of range
      */
     public Bus {

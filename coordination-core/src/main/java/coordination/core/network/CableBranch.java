@@ -23,6 +23,14 @@ public record CableBranch(String id, String from, String to, double lengthM, dou
     /**
      * Validates the branch.
      *
+     * @param id the cable's id
+     * @param from the sending bus
+     * @param to the receiving bus
+     * @param lengthM route length, m
+     * @param rOhmPerKm conductor resistance at 20 °C per conductor, Ω/km
+     * @param xOhmPerKm reactance per conductor, Ω/km
+     * @param endTemperatureC conductor temperature at the end of the fault, for minimum currents, °C
+     * @param parallel conductors in parallel per phase
      * @throws IllegalArgumentException if a value is missing or out of range
      */
     public CableBranch {

@@ -35,7 +35,14 @@ import org.apache.commons.math3.complex.Complex;
 public record FaultLevels(Network network, List<FaultLevel> levels, Map<String, Network.Branch> parents,
         Map<String, double[]> impedances) {
 
-    /** Copies the collections in. */
+    /**
+     * Copies the collections in.
+     *
+     * @param network the network
+     * @param levels the levels at every bus (in the network's order), then at both ends of every cable
+     * @param parents the branch feeding each bus from the source's side, absent for source buses
+     * @param impedances each bus's source impedance at its own voltage, {R max, X max, R min, X min} in Ω
+     */
     public FaultLevels {
         levels = List.copyOf(levels);
         parents = Collections.unmodifiableMap(new LinkedHashMap<>(parents));

@@ -88,7 +88,14 @@ public record Network(List<Bus> buses, List<Source> sources, List<Transformer> t
         }
     }
 
-    /** Copies the lists in. */
+    /**
+     * Copies the lists in.
+     *
+     * @param buses the buses
+     * @param sources the sources
+     * @param transformers the transformers
+     * @param cables the cable branches
+     */
     public Network {
         buses = List.copyOf(Checks.given("network: buses", buses));
         sources = List.copyOf(Checks.given("network: sources", sources));

@@ -16,6 +16,11 @@ public record Source(String id, String bus, double skMaxMva, double skMinMva, do
     /**
      * Validates the source.
      *
+     * @param id the source's id
+     * @param bus the bus it feeds
+     * @param skMaxMva initial symmetrical short-circuit power S″kQ for maximum currents, MVA
+     * @param skMinMva the same for minimum currents, MVA
+     * @param xOverR the ratio X/R of its impedance
      * @throws IllegalArgumentException if a value is missing or out of range
      */
     public Source {

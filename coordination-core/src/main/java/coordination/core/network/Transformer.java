@@ -19,6 +19,13 @@ public record Transformer(String id, String hvBus, String lvBus, double srKva, d
     /**
      * Validates the transformer.
      *
+     * @param id the transformer's id
+     * @param hvBus the HV bus
+     * @param lvBus the LV bus
+     * @param srKva rated power SrT, kVA
+     * @param ukPercent short-circuit voltage ukr, %
+     * @param pkKw load losses PkrT at rated current, kW
+     * @param vectorGroup the vector group, e.g. Dyn11
      * @throws IllegalArgumentException if a value is missing or out of range
      */
     public Transformer {

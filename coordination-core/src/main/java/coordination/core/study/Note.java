@@ -12,6 +12,8 @@ public record Note(String code, String message) {
     /**
      * Validates the note.
      *
+     * @param code a stable key for tools, e.g. {@code dc-offset-kappa-assumed}
+     * @param message one sentence for people
      * @throws IllegalArgumentException if a part is missing or empty
      */
     public Note {

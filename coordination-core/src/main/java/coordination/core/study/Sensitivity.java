@@ -25,6 +25,10 @@ public record Sensitivity(double minFactor, double maxFactor, StudyReport nomina
     /**
      * Validates the run.
      *
+     * @param minFactor factor on each range's lowest current, in (0, 1]
+     * @param maxFactor factor on each range's highest current, at least 1
+     * @param nominal the report of the study as given
+     * @param widened the report with every range widened
      * @throws IllegalArgumentException if a factor is out of range or the reports differ in size
      */
     public Sensitivity {

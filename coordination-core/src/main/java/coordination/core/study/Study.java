@@ -45,7 +45,14 @@ public record Study(String name, String title, double voltageKv, double frequenc
         /** A block with every field empty. */
         public static final SignOff NONE = new SignOff("", "", "", "");
 
-        /** Requires every field, empty or not. */
+        /**
+         * Requires every field, empty or not.
+         *
+         * @param drawing the drawing number
+         * @param prepared who prepared the study
+         * @param checked who checked it
+         * @param approved who approved it
+         */
         public SignOff {
             Checks.given("sign-off: drawing", drawing);
             Checks.given("sign-off: prepared", prepared);
@@ -92,7 +99,15 @@ public record Study(String name, String title, double voltageKv, double frequenc
      */
     public record StudyNetwork(coordination.core.network.Network network, coordination.core.network.FaultLevels levels,
             java.util.Map<String, Placement> placements, List<Accepted> accepted, List<Note> warnings) {
-        /** Copies the collections in. */
+        /**
+         * Copies the collections in.
+         *
+         * @param network the buses, sources, transformers and cable branches
+         * @param levels their fault levels
+         * @param placements each placed device's branch and end, by device id
+         * @param accepted derived pairs declared as not meant to grade
+         * @param warnings what the derivation could not do (a cable without a protecting device, ...)
+         */
         public StudyNetwork {
             placements = java.util.Collections.unmodifiableMap(new java.util.LinkedHashMap<>(placements));
             accepted = List.copyOf(accepted);
@@ -100,7 +115,22 @@ public record Study(String name, String title, double voltageKv, double frequenc
         }
     }
 
-    /** Copies the lists in. */
+    /**
+     * Copies the lists in.
+     *
+     * @param name the study's file name without extension, used to name outputs
+     * @param title the study title
+     * @param voltageKv reference voltage of the chart in kV
+     * @param frequencyHz system frequency in Hz
+     * @param revision revision text, or empty
+     * @param date date text as written in the study, or empty
+     * @param page page size of the sheet
+     * @param cables the cables
+     * @param devices the devices
+     * @param checks the checks
+     * @param signOff the drawing number and the names of who prepared, checked and approved the study
+     * @param network the network and its fault levels, if the study describes one
+     */
     public Study {
         Checks.given("study: sign-off", signOff);
         Checks.given("study: network", network);
@@ -184,6 +214,8 @@ public record Study(String name, String title, double voltageKv, double frequenc
         /**
          * Validates the range.
          *
+         * @param fromAmps lowest current in amperes, above 0
+         * @param toAmps highest current in amperes, at or above {@code fromAmps}
          * @throws IllegalArgumentException if an end is not positive or the range is inverted
          */
         public CurrentRange {
@@ -241,7 +273,16 @@ public record Study(String name, String title, double voltageKv, double frequenc
      */
     public record StudyDevice(ProtectiveDevice device, double voltageKv, double referralFactor,
             ProtectiveDevice referred, List<Note> assumptions, DesignLimits limits) {
-        /** Copies the list in. */
+        /**
+         * Copies the list in.
+         *
+         * @param device the device as set, currents at its own voltage
+         * @param voltageKv its voltage level in kV
+         * @param referralFactor the factor its currents are multiplied by at the study's reference voltage
+         * @param referred the device with currents at the study's reference voltage
+         * @param assumptions the defaults its model rests on, where the study states no value
+         * @param limits what a design proposal for its settings must respect
+         */
         public StudyDevice {
             assumptions = List.copyOf(assumptions);
         }
@@ -278,7 +319,14 @@ public record Study(String name, String title, double voltageKv, double frequenc
         public static final DesignLimits NONE = new DesignLimits(OptionalDouble.empty(), List.of(),
                 DEFAULT_SENSITIVITY_FACTOR, DEFAULT_PICKUP_STEP_A);
 
-        /** Copies the list in. */
+        /**
+         * Copies the list in.
+         *
+         * @param loadAmps the full-load current in primary amperes, if stated
+         * @param noTrip currents the relay must ride through
+         * @param sensitivityFactor the lowest fault current over the pickup must reach at least this
+         * @param pickupStepAmps resolution of the first inverse-time stage's pickup, in its setting's amperes
+         */
         public DesignLimits {
             noTrip = List.copyOf(noTrip);
         }

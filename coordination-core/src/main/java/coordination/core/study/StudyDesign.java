@@ -34,7 +34,13 @@ import java.util.OptionalDouble;
  */
 public record StudyDesign(Study study, List<CableAid> cableAids, List<GradingChain> chains) {
 
-    /** Copies the lists in. */
+    /**
+     * Copies the lists in.
+     *
+     * @param study the study
+     * @param cableAids one entry per cable check, in study order
+     * @param chains one entry per chain of relays linked by interval grading checks
+     */
     public StudyDesign {
         cableAids = List.copyOf(cableAids);
         chains = List.copyOf(chains);
@@ -128,7 +134,13 @@ public record StudyDesign(Study study, List<CableAid> cableAids, List<GradingCha
      * @param relays one setting per relay, from the load end up
      */
     public record GradingChain(List<GradingRequirement.Interval> intervals, List<RadialGrading.Setting> relays) {
-        /** Copies the list in. */
+        /**
+         * Copies the list in.
+         *
+         * @param intervals the interval over the relay below, one per relay (the first, the load end's, is that of the
+         *     check linking it upward)
+         * @param relays one setting per relay, from the load end up
+         */
         public GradingChain {
             intervals = List.copyOf(intervals);
             relays = List.copyOf(relays);

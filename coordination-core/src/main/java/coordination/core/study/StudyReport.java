@@ -28,7 +28,12 @@ public record StudyReport(Study study, List<CheckResult> results, List<CheckNote
      * @param warnings what its context says it leaves out
      */
     public record CheckNotes(List<Note> assumptions, List<Note> warnings) {
-        /** Copies the lists in. */
+        /**
+         * Copies the lists in.
+         *
+         * @param assumptions defaults and assumptions its result depends on
+         * @param warnings what its context says it leaves out
+         */
         public CheckNotes {
             assumptions = List.copyOf(assumptions);
             warnings = List.copyOf(warnings);
@@ -38,6 +43,10 @@ public record StudyReport(Study study, List<CheckResult> results, List<CheckNote
     /**
      * Copies the lists in.
      *
+     * @param study the study
+     * @param results one result per check, in the order of the study's checks
+     * @param notes the assumptions and warnings of each check, in the same order
+     * @param warnings warnings about the study as a whole
      * @throws IllegalArgumentException if there are not as many notes as results
      */
     public StudyReport {

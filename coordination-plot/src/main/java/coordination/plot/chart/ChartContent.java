@@ -35,7 +35,17 @@ public record ChartContent(String title, double referenceKv, List<ProtectiveDevi
     public record FaultRange(String cable, double minAmps, double maxAmps) {
     }
 
-    /** Copies the lists in. */
+    /**
+     * Copies the lists in.
+     *
+     * @param title chart title
+     * @param referenceKv reference voltage of the current axis in kV
+     * @param devices devices to draw, in legend order
+     * @param cables cable limits to draw
+     * @param faults prospective fault-current ranges to mark, one per cable that has one
+     * @param cableResults cable check results whose crossings and minimum margins are marked
+     * @param gradingResults grading results whose ranges and crossings are marked
+     */
     public ChartContent {
         devices = List.copyOf(devices);
         cables = List.copyOf(cables);
