@@ -85,6 +85,33 @@ class SchemaTest {
         assertThat(errors.toString(), errors, empty());
     }
 
+    /** What check --json prints for several files, one of them unreadable, fits the schema's list form. */
+    @Test
+    void reportSchemaAcceptsTheListOfSeveralStudies() throws Exception {
+        java.io.ByteArrayOutputStream out = new java.io.ByteArrayOutputStream();
+        java.io.ByteArrayOutputStream err = new java.io.ByteArrayOutputStream();
+        Path bad = Files.createTempFile("unreadable", ".yaml");
+        try {
+            Files.writeString(bad, "format: 1\ntitle: [\n");
+            int code = coordination.plot.cli.Cli.run(new java.io.PrintStream(out, true, "UTF-8"),
+                    new java.io.PrintStream(err, true, "UTF-8"), "check", "--json", "01-main-switchboard-incomer.yaml",
+                    bad.toString());
+            assertThat(code, is(2));
+        } finally {
+            Files.delete(bad);
+        }
+        JsonNode list = new ObjectMapper().readTree(out.toString(java.nio.charset.StandardCharsets.UTF_8));
+        assertThat(list.get("studies").size(), is(1));
+        assertThat(list.get("not_read").get(0).get("file").asText(), is(bad.toString()));
+        assertThat(list.get("not_read").get(0).get("errors").get(0).asText(), org.hamcrest.Matchers.startsWith(
+                bad + ":"));
+        Set<ValidationMessage> errors = schema("report.schema.json").validate(list);
+        assertThat(errors.toString(), errors, empty());
+        // and a bare report is not mistaken for the list, nor the list for a report
+        ((com.fasterxml.jackson.databind.node.ObjectNode) list).remove("not_read");
+        assertThat(schema("report.schema.json").validate(list).isEmpty(), is(false));
+    }
+
     /**
      * Invalid cases of the corpus that the study schema accepts, each with the reason no JSON
      * Schema can refuse it: the rule is about YAML itself, relates two values, or needs a model.

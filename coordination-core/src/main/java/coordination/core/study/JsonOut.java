@@ -103,6 +103,11 @@ final class JsonOut {
         return write(() -> value(value));
     }
 
+    /** A text as an array element. */
+    JsonOut element(String value) {
+        return write(() -> g.writeString(value));
+    }
+
     /** {@code [from, to]}. */
     JsonOut pair(String key, double from, double to) {
         return startArray(key).element(from).element(to).endArray();

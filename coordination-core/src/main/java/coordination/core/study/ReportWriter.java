@@ -63,12 +63,54 @@ public final class ReportWriter {
      * @return the JSON text
      */
     public static String writeSensitivities(List<Sensitivity> runs, boolean pass) {
+        return writeSensitivities(runs, List.of(), pass);
+    }
+
+    /**
+     * The reports of several studies with their sensitivity runs, and the studies that could not
+     * be read: {@code {"format", "pass", "studies", "not_read"}}.
+     *
+     * @param runs the studies' runs
+     * @param notRead the files that could not be read, with their error lines
+     * @param pass whether every study was read and every check passes
+     * @return the JSON text
+     */
+    public static String writeSensitivities(List<Sensitivity> runs, List<NotRead> notRead, boolean pass) {
         JsonOut j = new JsonOut().startObject();
         j.integer("format", StudyReport.FORMAT).bool("pass", pass).startArray("studies");
         for (Sensitivity r : runs) {
             report(j, r.nominal(), r);
         }
-        return j.endArray().endObject().finish();
+        j.endArray();
+        return notRead(j, notRead).endObject().finish();
+    }
+
+    /**
+     * A study file that could not be read, in a list of reports.
+     *
+     * @param file the file as it was named
+     * @param errors its error lines, each {@code FILE:LINE:COLUMN: key: message}
+     */
+    public record NotRead(String file, List<String> errors) {
+        /**
+         * Copies the list in.
+         *
+         * @param file the file as it was named
+         * @param errors its error lines
+         */
+        public NotRead {
+            errors = List.copyOf(errors);
+        }
+    }
+
+    private static JsonOut notRead(JsonOut j, List<NotRead> notRead) {
+        j.startArray("not_read");
+        for (NotRead n : notRead) {
+            j.startObject().text("file", n.file()).startArray("errors");
+            n.errors().forEach(j::element);
+            j.endArray().endObject();
+        }
+        return j.endArray();
     }
 
     /**
@@ -79,12 +121,26 @@ public final class ReportWriter {
      * @return the JSON text
      */
     public static String write(List<StudyReport> reports, boolean pass) {
+        return write(reports, List.of(), pass);
+    }
+
+    /**
+     * The reports of several studies and the studies that could not be read:
+     * {@code {"format", "pass", "studies", "not_read"}}.
+     *
+     * @param reports the evaluated studies
+     * @param notRead the files that could not be read, with their error lines
+     * @param pass whether every study was read and every check passes
+     * @return the JSON text
+     */
+    public static String write(List<StudyReport> reports, List<NotRead> notRead, boolean pass) {
         JsonOut j = new JsonOut().startObject();
         j.integer("format", StudyReport.FORMAT).bool("pass", pass).startArray("studies");
         for (StudyReport r : reports) {
             report(j, r, null);
         }
-        return j.endArray().endObject().finish();
+        j.endArray();
+        return notRead(j, notRead).endObject().finish();
     }
 
     /**
@@ -149,7 +205,7 @@ public final class ReportWriter {
     public static String write(WithstandTable table) {
         CableThermalLimit first = table.rows().get(0).cable();
         JsonOut j = new JsonOut().startObject();
-        j.text("conductor", first.material().key()).text("insulation", first.insulation().key())
+        j.integer("format", StudyReport.FORMAT).text("conductor", first.material().key()).text("insulation", first.insulation().key())
                 .text("method", first.method().key()).startArray("sizes");
         double[] times = table.timesSeconds();
         for (WithstandTable.Row row : table.rows()) {

@@ -33,6 +33,7 @@ import coordination.core.margin.GradingRequirement;
 import coordination.core.margin.MarginRequirement;
 import coordination.core.study.Binder.NumberField;
 import java.io.IOException;
+import java.io.InputStream;
 import java.nio.charset.CharacterCodingException;
 import java.nio.charset.CodingErrorAction;
 import java.nio.charset.StandardCharsets;
@@ -207,23 +208,9 @@ public final class StudyReader {
                 throw single(shown, "the file is " + size + " bytes - study files are limited to " + MAX_FILE_BYTES
                         + " bytes (1 MiB)");
             }
-            // read at most one byte more than the limit, whatever size the file system reports
-            byte[] bytes;
-            try (java.io.InputStream in = Files.newInputStream(path)) {
-                bytes = in.readNBytes((int) MAX_FILE_BYTES + 1);
+            try (InputStream in = Files.newInputStream(path)) {
+                return read(in, shown, base);
             }
-            if (bytes.length > MAX_FILE_BYTES) {
-                throw single(shown, "the file is over " + MAX_FILE_BYTES + " bytes - study files are limited to 1 MiB");
-            }
-            String text;
-            try {
-                text = StandardCharsets.UTF_8.newDecoder().onMalformedInput(CodingErrorAction.REPORT)
-                        .onUnmappableCharacter(CodingErrorAction.REPORT).decode(java.nio.ByteBuffer.wrap(bytes))
-                        .toString();
-            } catch (CharacterCodingException e) {
-                throw single(shown, "the file is not UTF-8 text");
-            }
-            return parse(shown, base, text);
         } catch (java.nio.file.AccessDeniedException e) {
             throw single(shown, "cannot read the file: permission denied");
         } catch (java.nio.file.NoSuchFileException e) {
@@ -231,6 +218,33 @@ public final class StudyReader {
         } catch (IOException e) {
             throw single(shown, "cannot read the file: " + e.getMessage());
         }
+    }
+
+    /**
+     * Reads a study from a stream, such as standard input: at most 1 MiB of UTF-8 text.
+     *
+     * @param in the stream, read to its end (or just past the limit); not closed
+     * @param file the name to show in problems
+     * @param name the study's name for its outputs
+     * @return the study
+     * @throws StudyFileException with every problem found, or one for text too long or not UTF-8
+     * @throws IOException if the stream cannot be read
+     */
+    public static Study read(InputStream in, String file, String name) throws IOException {
+        // read at most one byte more than the limit, whatever size the source claims
+        byte[] bytes = in.readNBytes((int) MAX_FILE_BYTES + 1);
+        if (bytes.length > MAX_FILE_BYTES) {
+            throw single(file, "the file is over " + MAX_FILE_BYTES + " bytes - study files are limited to 1 MiB");
+        }
+        String text;
+        try {
+            text = StandardCharsets.UTF_8.newDecoder().onMalformedInput(CodingErrorAction.REPORT)
+                    .onUnmappableCharacter(CodingErrorAction.REPORT).decode(java.nio.ByteBuffer.wrap(bytes))
+                    .toString();
+        } catch (CharacterCodingException e) {
+            throw single(file, "the file is not UTF-8 text");
+        }
+        return parse(file, name, text);
     }
 
     private static StudyFileException single(String file, String message) {

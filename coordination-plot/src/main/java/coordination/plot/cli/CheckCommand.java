@@ -8,7 +8,9 @@ import coordination.core.study.ReportWriter;
 import coordination.core.study.Sensitivity;
 import coordination.core.study.Study;
 import coordination.core.study.StudyReport;
+import coordination.core.study.TextRules;
 import coordination.core.Quantities;
+import java.io.InputStream;
 import java.io.PrintStream;
 import java.nio.file.Path;
 import java.util.ArrayList;
@@ -34,14 +36,20 @@ final class CheckCommand implements Callable<Integer> {
     /** Significant figures of computed values in the table: the inputs are uncertain by 10 % or more. */
     private static final int FIGURES = 3;
 
+    private final InputStream in;
     private final PrintStream out;
     private final PrintStream err;
 
-    @Parameters(arity = "1..*", paramLabel = "STUDY", description = "study files or folders of them")
+    @Parameters(arity = "1..*", paramLabel = "STUDY", description = "study files or folders of them; - reads one"
+            + " study from standard input")
     List<Path> inputs;
 
     @Option(names = "--json", description = "print the JSON report (one study) or a list of reports")
     boolean json;
+
+    @Option(names = {"-r", "--recursive"}, description = "search folders in their subfolders too (hidden ones are"
+            + " skipped)")
+    boolean recursive;
 
     @Option(names = "--sensitivity", arity = "0..1", paramLabel = "MIN,MAX",
             parameterConsumer = FactorsConsumer.class,
@@ -77,14 +85,15 @@ final class CheckCommand implements Callable<Integer> {
 
     private static final Pattern TWO_NUMBERS = Pattern.compile("\\s*[-+0-9.eE]+\\s*,\\s*[-+0-9.eE]+\\s*");
 
-    CheckCommand(PrintStream out, PrintStream err) {
+    CheckCommand(InputStream in, PrintStream out, PrintStream err) {
+        this.in = in;
         this.out = out;
         this.err = err;
     }
 
     @Override
     public Integer call() {
-        List<Path> files = StudyInputs.collect(inputs, err);
+        List<Path> files = StudyInputs.collect(inputs, recursive, err);
         if (files == null) {
             return ExitCodes.BAD_INPUT;
         }
@@ -96,12 +105,16 @@ final class CheckCommand implements Callable<Integer> {
         boolean failed = false;
         List<StudyReport> reports = new ArrayList<>();
         List<Sensitivity> runs = new ArrayList<>();
+        List<ReportWriter.NotRead> notRead = new ArrayList<>();
         for (Path f : files) {
-            StudyInputs.Loaded l = StudyInputs.load(f);
+            StudyInputs.Loaded l = StudyInputs.load(f, in);
             if (l.study() == null) {
+                List<String> lines = new ArrayList<>();
                 for (Problem p : l.problems()) {
                     err.println(p);
+                    lines.add(p.toString());
                 }
+                notRead.add(new ReportWriter.NotRead(TextRules.printable(f.toString()), lines));
                 invalid = true;
                 continue;
             }
@@ -116,9 +129,10 @@ final class CheckCommand implements Callable<Integer> {
         if (json) {
             if (files.size() == 1 && reports.size() == 1) {
                 out.print(runs.isEmpty() ? ReportWriter.write(reports.get(0)) : ReportWriter.write(runs.get(0)));
-            } else if (!reports.isEmpty() || !invalid) {
-                out.print(runs.isEmpty() ? ReportWriter.write(reports, !failed && !invalid)
-                        : ReportWriter.writeSensitivities(runs, !failed && !invalid));
+            } else if (files.size() > 1) {
+                // several files: the list form, with the studies that could not be read in not_read
+                out.print(sensitivity == null ? ReportWriter.write(reports, notRead, !failed && !invalid)
+                        : ReportWriter.writeSensitivities(runs, notRead, !failed && !invalid));
             }
         } else {
             for (int i = 0; i < reports.size(); i++) {

@@ -1,9 +1,11 @@
 package coordination.plot.cli;
 
+import java.io.InputStream;
 import java.io.PrintStream;
 import java.io.PrintWriter;
 import java.nio.charset.StandardCharsets;
 import java.util.List;
+import java.util.concurrent.Callable;
 import picocli.CommandLine;
 import picocli.CommandLine.Command;
 
@@ -12,14 +14,14 @@ import picocli.CommandLine.Command;
         description = "Checks that protective devices protect their cables and grade with each other,"
                 + " and draws coordination sheets.",
         exitCodeOnInvalidInput = ExitCodes.BAD_INPUT, exitCodeOnExecutionException = ExitCodes.INTERNAL_ERROR)
-public final class Cli implements Runnable {
+public final class Cli implements Callable<Integer> {
     /**
      * The subcommands, in the order help lists them. They are registered by hand rather than in
      * the annotation, so that a run builds the model of the one it asks for: building all five
      * cost a quarter of a cold start.
      */
     private static final List<Class<?>> SUBCOMMANDS = List.of(SheetCommand.class, CheckCommand.class,
-            WithstandCommand.class, DesignCommand.class, FaultsCommand.class);
+            WithstandCommand.class, DesignCommand.class, FaultsCommand.class, CompletionCommand.class);
     private final PrintStream out;
     private final PrintStream err;
 
@@ -34,9 +36,22 @@ public final class Cli implements Runnable {
         this.err = err;
     }
 
+    /** With no subcommand there is nothing to do: the usage goes to standard error, as a mistake's would. */
     @Override
-    public void run() {
-        out.println(withSubcommands(new CommandLine(this, new Factory(out, err)), null).getUsageMessage());
+    public Integer call() {
+        err.print(full(out, err).getUsageMessage());
+        return ExitCodes.BAD_INPUT;
+    }
+
+    /**
+     * The whole command line, every subcommand built: for usage and for the completion script.
+     *
+     * @param out standard output
+     * @param err standard error
+     * @return the command line
+     */
+    static CommandLine full(PrintStream out, PrintStream err) {
+        return withSubcommands(new CommandLine(new Cli(out, err), new Factory(System.in, out, err)), null);
     }
 
     /**
@@ -62,8 +77,22 @@ public final class Cli implements Runnable {
      * @return the exit code
      */
     public static int run(PrintStream out, PrintStream err, String... args) {
+        return run(System.in, out, err, args);
+    }
+
+    /**
+     * Runs the command line in-process, with a study on standard input for the argument {@code -}.
+     *
+     * @param in standard input
+     * @param out standard output
+     * @param err standard error
+     * @param args the arguments
+     * @return the exit code
+     */
+    public static int run(InputStream in, PrintStream out, PrintStream err, String... args) {
         Cli cli = new Cli(out, err);
-        CommandLine cl = withSubcommands(new CommandLine(cli, new Factory(out, err)), args.length > 0 ? args[0] : null);
+        CommandLine cl = withSubcommands(new CommandLine(cli, new Factory(in, out, err)),
+                args.length > 0 ? args[0] : null);
         cl.setOut(new PrintWriter(out, true, StandardCharsets.UTF_8));
         cl.setErr(new PrintWriter(err, true, StandardCharsets.UTF_8));
         cl.setParameterExceptionHandler((ex, a) -> {
@@ -96,23 +125,26 @@ public final class Cli implements Runnable {
     }
 
     /** Builds subcommands with the injected streams. */
-    private record Factory(PrintStream out, PrintStream err) implements CommandLine.IFactory {
+    private record Factory(InputStream in, PrintStream out, PrintStream err) implements CommandLine.IFactory {
         @Override
         public <K> K create(Class<K> cls) throws Exception {
             if (cls == SheetCommand.class) {
-                return cls.cast(new SheetCommand(out, err));
+                return cls.cast(new SheetCommand(in, out, err));
             }
             if (cls == CheckCommand.class) {
-                return cls.cast(new CheckCommand(out, err));
+                return cls.cast(new CheckCommand(in, out, err));
             }
             if (cls == WithstandCommand.class) {
                 return cls.cast(new WithstandCommand(out, err));
             }
             if (cls == DesignCommand.class) {
-                return cls.cast(new DesignCommand(out, err));
+                return cls.cast(new DesignCommand(in, out, err));
             }
             if (cls == FaultsCommand.class) {
-                return cls.cast(new FaultsCommand(out, err));
+                return cls.cast(new FaultsCommand(in, out, err));
+            }
+            if (cls == CompletionCommand.class) {
+                return cls.cast(new CompletionCommand(out, err));
             }
             return CommandLine.defaultFactory().create(cls);
         }

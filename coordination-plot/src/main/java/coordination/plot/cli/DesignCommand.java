@@ -8,6 +8,7 @@ import coordination.core.study.Problem;
 import coordination.core.study.ReportWriter;
 import coordination.core.study.StudyDesign;
 import coordination.core.Quantities;
+import java.io.InputStream;
 import java.io.PrintStream;
 import java.nio.file.Path;
 import java.util.List;
@@ -25,6 +26,7 @@ final class DesignCommand implements Callable<Integer> {
     /** Significant figures of computed values in the text output: the inputs are uncertain by 10 % or more. */
     private static final int FIGURES = 3;
 
+    private final InputStream in;
     private final PrintStream out;
     private final PrintStream err;
 
@@ -34,7 +36,8 @@ final class DesignCommand implements Callable<Integer> {
     @Option(names = "--json", description = "print the proposals as JSON")
     boolean json;
 
-    DesignCommand(PrintStream out, PrintStream err) {
+    DesignCommand(InputStream in, PrintStream out, PrintStream err) {
+        this.in = in;
         this.out = out;
         this.err = err;
     }
@@ -48,7 +51,7 @@ final class DesignCommand implements Callable<Integer> {
             }
             return ExitCodes.BAD_INPUT;
         }
-        StudyInputs.Loaded l = StudyInputs.load(files.get(0));
+        StudyInputs.Loaded l = StudyInputs.load(files.get(0), in);
         if (l.study() == null) {
             for (Problem p : l.problems()) {
                 err.println(p);

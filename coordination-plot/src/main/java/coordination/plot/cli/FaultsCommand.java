@@ -5,6 +5,7 @@ import coordination.core.network.FaultLevel;
 import coordination.core.study.Problem;
 import coordination.core.study.ReportWriter;
 import coordination.core.study.Study;
+import java.io.InputStream;
 import java.io.PrintStream;
 import java.nio.file.Path;
 import java.util.List;
@@ -21,6 +22,7 @@ import picocli.CommandLine.Parameters;
 final class FaultsCommand implements Callable<Integer> {
     private static final int FIGURES = 3;
 
+    private final InputStream in;
     private final PrintStream out;
     private final PrintStream err;
 
@@ -30,7 +32,8 @@ final class FaultsCommand implements Callable<Integer> {
     @Option(names = "--json", description = "print the levels as JSON")
     boolean json;
 
-    FaultsCommand(PrintStream out, PrintStream err) {
+    FaultsCommand(InputStream in, PrintStream out, PrintStream err) {
+        this.in = in;
         this.out = out;
         this.err = err;
     }
@@ -44,7 +47,7 @@ final class FaultsCommand implements Callable<Integer> {
             }
             return ExitCodes.BAD_INPUT;
         }
-        StudyInputs.Loaded l = StudyInputs.load(files.get(0));
+        StudyInputs.Loaded l = StudyInputs.load(files.get(0), in);
         if (l.study() == null) {
             for (Problem p : l.problems()) {
                 err.println(p);

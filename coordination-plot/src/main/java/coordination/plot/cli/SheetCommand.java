@@ -6,6 +6,7 @@ import coordination.core.study.StudyReport;
 import coordination.plot.sheet.OutputFormat;
 import coordination.plot.sheet.SheetWriter;
 import java.io.IOException;
+import java.io.InputStream;
 import java.io.PrintStream;
 import java.nio.file.Path;
 import java.util.ArrayList;
@@ -28,16 +29,19 @@ import picocli.CommandLine.Parameters;
         description = "Writes a coordination sheet and NAME.report.json for each study file. A folder means"
                 + " every *.yaml in it; folders are processed in parallel on all cores.")
 final class SheetCommand implements Callable<Integer> {
+    private final InputStream in;
     private final PrintStream out;
     private final PrintStream err;
 
-    @Parameters(arity = "1..*", paramLabel = "STUDY", description = "study files or folders of them")
+    @Parameters(arity = "1..*", paramLabel = "STUDY", description = "study files or folders of them; - reads one"
+            + " study from standard input")
     List<Path> inputs;
 
     @Option(names = {"-o", "--output"}, required = true, paramLabel = "OUTDIR", description = "output folder")
     Path output;
 
-    @Option(names = "--format", split = ",", paramLabel = "FORMAT", description = "svg, png, pdf (default: svg,png)")
+    @Option(names = "--format", split = ",", paramLabel = "FORMAT", completionCandidates = Formats.class,
+            description = "${COMPLETION-CANDIDATES}, comma-separated (default: svg,png)")
     List<String> formats = List.of("svg", "png");
 
     @Option(names = "--dpi", paramLabel = "DPI", description = "PNG resolution, 72 to 600 (default: 150)")
@@ -46,7 +50,25 @@ final class SheetCommand implements Callable<Integer> {
     @Option(names = "--threads", paramLabel = "N", description = "worker threads (default: all cores)")
     int threads = Runtime.getRuntime().availableProcessors();
 
-    SheetCommand(PrintStream out, PrintStream err) {
+    @Option(names = {"-r", "--recursive"}, description = "search folders in their subfolders too (hidden ones are"
+            + " skipped)")
+    boolean recursive;
+
+    @Option(names = {"-q", "--quiet"}, description = "no progress bar and no summary; errors still go to standard"
+            + " error, and the exit code tells the verdict")
+    boolean quiet;
+
+    /** The sheet formats, for help and completion. */
+    static final class Formats implements Iterable<String> {
+        @Override
+        public java.util.Iterator<String> iterator() {
+            return java.util.Arrays.stream(OutputFormat.values()).map(f -> f.name().toLowerCase(java.util.Locale.ROOT))
+                    .iterator();
+        }
+    }
+
+    SheetCommand(InputStream in, PrintStream out, PrintStream err) {
+        this.in = in;
         this.out = out;
         this.err = err;
     }
@@ -80,7 +102,7 @@ final class SheetCommand implements Callable<Integer> {
             err.println("coordination sheet: --dpi: found " + dpi + " - must be from 72 to 600");
             return ExitCodes.BAD_INPUT;
         }
-        List<Path> files = StudyInputs.collect(inputs, err);
+        List<Path> files = StudyInputs.collect(inputs, recursive, err);
         if (files == null) {
             return ExitCodes.BAD_INPUT;
         }
@@ -120,11 +142,22 @@ final class SheetCommand implements Callable<Integer> {
             futures.add(pool.submit(() -> why != null ? new Outcome(f, List.of(), Verdict.NOT_READ, why, 0)
                     : process(f, chosen)));
         }
-        Progress progress = new Progress(err, files.size());
+        Progress progress = new Progress(quiet ? null : err, files.size());
         List<Outcome> outcomes = new ArrayList<>();
         try {
             for (Future<Outcome> fu : futures) {
-                outcomes.add(fu.get());
+                Outcome o = fu.get();
+                outcomes.add(o);
+                // each study's errors as soon as it is done, in the order the studies were given
+                if (!o.problems().isEmpty() || o.error() != null) {
+                    progress.clear();
+                    for (Problem p : o.problems()) {
+                        err.println(p);
+                    }
+                    if (o.error() != null) {
+                        err.println(TextRules.printable(o.file().toString()) + ": " + o.error());
+                    }
+                }
                 progress.step();
             }
         } catch (ExecutionException e) {
@@ -136,14 +169,11 @@ final class SheetCommand implements Callable<Integer> {
         Map<Verdict, List<String>> byVerdict = new java.util.EnumMap<>(Verdict.class);
         int written = 0;
         for (Outcome o : outcomes) {
-            for (Problem p : o.problems()) {
-                err.println(p);
-            }
-            if (o.error() != null) {
-                err.println(TextRules.printable(o.file().toString()) + ": " + o.error());
-            }
             byVerdict.computeIfAbsent(o.verdict(), k -> new ArrayList<>()).add(TextRules.printable(o.file().toString()));
             written += o.written();
+        }
+        if (quiet) {
+            return exitCode(byVerdict);
         }
         out.println("sheets: " + outcomes.size() + " studies, " + count(byVerdict, Verdict.PASS) + " pass, "
                 + count(byVerdict, Verdict.FAIL) + " fail, " + (count(byVerdict, Verdict.NOT_READ)
@@ -154,6 +184,10 @@ final class SheetCommand implements Callable<Integer> {
                 out.println("  " + v.word + ": " + String.join(", ", byVerdict.get(v)));
             }
         }
+        return exitCode(byVerdict);
+    }
+
+    private static int exitCode(Map<Verdict, List<String>> byVerdict) {
         if (byVerdict.containsKey(Verdict.INTERNAL_ERROR)) {
             return ExitCodes.INTERNAL_ERROR;
         }
@@ -167,7 +201,7 @@ final class SheetCommand implements Callable<Integer> {
 
     private Outcome process(Path file, Set<OutputFormat> chosen) {
         try {
-            StudyInputs.Loaded l = StudyInputs.load(file);
+            StudyInputs.Loaded l = StudyInputs.load(file, in);
             if (l.study() == null) {
                 return new Outcome(file, l.problems(), Verdict.NOT_READ, null, 0);
             }
@@ -209,11 +243,16 @@ final class SheetCommand implements Callable<Integer> {
             }
         }
 
-        void done() {
+        /** Wipes the bar, so that a message can take its line; the next step draws it again. */
+        void clear() {
             if (terminal) {
                 out.print("\r" + " ".repeat(50) + "\r");
                 out.flush();
             }
+        }
+
+        void done() {
+            clear();
         }
     }
 }

@@ -26,15 +26,37 @@ final class StudyInputs {
      * @return the files, or null if an argument is neither a readable file nor a folder
      */
     static List<Path> collect(List<Path> args, PrintStream err) {
+        return collect(args, false, err);
+    }
+
+    /** The argument that stands for standard input. */
+    static final Path STDIN = Path.of("-");
+
+    /**
+     * Lists the study files named by the arguments, in a stable order.
+     *
+     * @param args files and folders; {@code -} is standard input, once
+     * @param recursive whether folders are searched in their subfolders too (hidden ones skipped)
+     * @param err where problems go
+     * @return the files, or null if an argument is neither a readable file nor a folder
+     */
+    static List<Path> collect(List<Path> args, boolean recursive, PrintStream err) {
         List<Path> files = new ArrayList<>();
         boolean ok = true;
         for (Path a : args) {
             String shown = TextRules.printable(a.toString());
-            if (Files.isDirectory(a)) {
-                try (Stream<Path> s = Files.list(a)) {
+            if (a.equals(STDIN)) {
+                if (files.contains(STDIN)) {
+                    err.println("-: standard input can be read once - give '-' once");
+                    ok = false;
+                } else {
+                    files.add(STDIN);
+                }
+            } else if (Files.isDirectory(a)) {
+                try (Stream<Path> s = recursive ? Files.walk(a) : Files.list(a)) {
                     for (Path p : s.sorted().toList()) {
                         String n = p.getFileName().toString();
-                        if (!isStudyName(n) || !Files.isRegularFile(p)) {
+                        if (!isStudyName(n) || !Files.isRegularFile(p) || recursive && hiddenBelow(a, p)) {
                             continue;
                         }
                         if (n.startsWith(".")) {
@@ -61,6 +83,20 @@ final class StudyInputs {
         return ok ? files : null;
     }
 
+    /** Whether a file found by a recursive search lies in a hidden folder below the one named. */
+    private static boolean hiddenBelow(Path root, Path file) {
+        Path rel = root.relativize(file).getParent();
+        if (rel == null) {
+            return false;
+        }
+        for (Path part : rel) {
+            if (part.toString().startsWith(".")) {
+                return true;
+            }
+        }
+        return false;
+    }
+
     /** A study file's name ends in .yaml or .yml, in any case. */
     static boolean isStudyName(String name) {
         String n = name.toLowerCase(java.util.Locale.ROOT);
@@ -79,6 +115,9 @@ final class StudyInputs {
     }
 
     static String baseName(Path file) {
+        if (file.equals(STDIN)) {
+            return "stdin";
+        }
         String n = file.getFileName().toString();
         int dot = n.lastIndexOf('.');
         return dot > 0 ? n.substring(0, dot) : n;
@@ -88,11 +127,17 @@ final class StudyInputs {
     record Loaded(Path file, Study study, List<Problem> problems) {
     }
 
-    static Loaded load(Path file) {
+    static Loaded load(Path file, java.io.InputStream stdin) {
         try {
+            if (file.equals(STDIN)) {
+                return new Loaded(file, StudyReader.read(stdin, "<stdin>", "stdin"), List.of());
+            }
             return new Loaded(file, StudyReader.read(file), List.of());
         } catch (StudyFileException e) {
             return new Loaded(file, null, e.problems());
+        } catch (IOException e) {
+            return new Loaded(file, null, List.of(new Problem("<stdin>", 1, 1, "", "cannot read standard input: "
+                    + reason(e))));
         }
     }
 }

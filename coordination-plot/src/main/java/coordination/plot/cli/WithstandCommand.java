@@ -28,10 +28,12 @@ final class WithstandCommand implements Callable<Integer> {
     private final PrintStream out;
     private final PrintStream err;
 
-    @Option(names = "--conductor", required = true, paramLabel = "MATERIAL", description = "copper or aluminium")
+    @Option(names = "--conductor", required = true, paramLabel = "MATERIAL", completionCandidates = Materials.class,
+            description = "${COMPLETION-CANDIDATES}")
     String conductor;
 
-    @Option(names = "--insulation", required = true, paramLabel = "TYPE", description = "pvc, xlpe, epr, ...")
+    @Option(names = "--insulation", required = true, paramLabel = "TYPE", completionCandidates = Insulations.class,
+            description = "${COMPLETION-CANDIDATES}")
     String insulation;
 
     @Option(names = "--size", paramLabel = "SIZE", description = "mm² (70), or \"4/0 AWG\", \"250 kcmil\";"
@@ -51,11 +53,58 @@ final class WithstandCommand implements Callable<Integer> {
     @Option(names = "--final-c", paramLabel = "C", description = "final temperature (default: insulation's)")
     Double finalC;
 
-    @Option(names = "--method", paramLabel = "METHOD", description = "adiabatic, non-adiabatic or icea")
+    @Option(names = "--method", paramLabel = "METHOD", completionCandidates = Methods.class,
+            description = "${COMPLETION-CANDIDATES} (default: adiabatic)")
     String method = "adiabatic";
 
-    @Option(names = "--output", paramLabel = "FORM", description = "text, csv or json (default: text)")
+    @Option(names = "--output", paramLabel = "FORM", completionCandidates = Forms.class,
+            description = "${COMPLETION-CANDIDATES} (default: text)")
     String output = "text";
+
+    @Option(names = "--json", description = "the same as --output json")
+    boolean json;
+
+    /** The conductor materials' keys, for help and completion. */
+    static final class Materials extends Keys {
+        Materials() {
+            super(java.util.Arrays.stream(ConductorMaterial.values()).map(ConductorMaterial::key).toList());
+        }
+    }
+
+    /** The insulations' keys. */
+    static final class Insulations extends Keys {
+        Insulations() {
+            super(java.util.Arrays.stream(Insulation.values()).map(Insulation::key).toList());
+        }
+    }
+
+    /** The thermal methods' keys. */
+    static final class Methods extends Keys {
+        Methods() {
+            super(java.util.Arrays.stream(ThermalMethod.values()).map(ThermalMethod::key).toList());
+        }
+    }
+
+    /** The output forms. */
+    static final class Forms extends Keys {
+        Forms() {
+            super(List.of("text", "csv", "json"));
+        }
+    }
+
+    /** A fixed list of allowed values. */
+    abstract static class Keys implements Iterable<String> {
+        private final List<String> keys;
+
+        Keys(List<String> keys) {
+            this.keys = keys;
+        }
+
+        @Override
+        public java.util.Iterator<String> iterator() {
+            return keys.iterator();
+        }
+    }
 
     WithstandCommand(PrintStream out, PrintStream err) {
         this.out = out;
@@ -75,6 +124,9 @@ final class WithstandCommand implements Callable<Integer> {
         }
         if (tm == null) {
             return bad("--method: found '" + method + "' - must be adiabatic, non-adiabatic or icea");
+        }
+        if (json) {
+            output = "json";
         }
         if (!List.of("text", "csv", "json").contains(output)) {
             return bad("--output: found '" + output + "' - must be text, csv or json");

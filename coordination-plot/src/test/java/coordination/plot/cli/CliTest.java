@@ -266,4 +266,67 @@ class CliTest {
         assertThat(r.code(), is(ExitCodes.BAD_INPUT));
         assertEquals("no-such.yaml: no such study file or folder\n", r.err());
     }
+
+    @Test
+    void noArgumentsIsAMistake() {
+        InProcess.Run r = run();
+        assertThat(r.code(), is(ExitCodes.BAD_INPUT));
+        assertThat(r.out(), is(""));
+        assertThat(r.err(), containsString("Usage: coordination"));
+        assertThat(r.err(), containsString("completion"));
+    }
+
+    @Test
+    void aStudyOnStandardInputIsCheckedAndDrawnAsStdin(@TempDir Path tmp) throws Exception {
+        String study = Files.readString(SAMPLES.resolve("05-blower-feeder-undersized.yaml"));
+        InProcess.Run r = InProcess.withInput(study, "check", "-");
+        assertThat(r.err(), r.code(), is(ExitCodes.CHECK_FAILED));
+        assertThat(r.out(), containsString("stdin: "));
+        InProcess.Run s = InProcess.withInput(study, "sheet", "-", "-o", tmp.toString(), "--format", "svg");
+        assertThat(s.err(), s.code(), is(ExitCodes.CHECK_FAILED));
+        assertThat(files(tmp), is(List.of("stdin.report.json", "stdin.svg")));
+        InProcess.Run bad = InProcess.withInput(study.replace("pickup_a: 160,", "pickup_a: lots,"), "check", "-");
+        assertThat(bad.code(), is(ExitCodes.BAD_INPUT));
+        assertThat(bad.err(), containsString("<stdin>:27:45: devices[0].stages[0].pickup_a: expected a number"));
+        assertThat(run("check", "-", "-").err(), containsString("standard input can be read once"));
+    }
+
+    @Test
+    void recursiveFindsStudiesInSubfoldersButNotHiddenOnes(@TempDir Path tmp) throws Exception {
+        Path deep = Files.createDirectories(tmp.resolve("a/b"));
+        Path hidden = Files.createDirectories(tmp.resolve(".old"));
+        Files.copy(SAMPLES.resolve("01-main-switchboard-incomer.yaml"), deep.resolve("one.yaml"));
+        Files.copy(SAMPLES.resolve("01-main-switchboard-incomer.yaml"), hidden.resolve("two.yaml"));
+        assertThat(run("check", tmp.toString()).code(), is(ExitCodes.BAD_INPUT));
+        InProcess.Run r = run("check", "--recursive", tmp.toString());
+        assertThat(r.err(), r.code(), is(ExitCodes.PASS));
+        assertThat(r.out(), containsString("one: "));
+        assertThat(r.out().contains("two: "), is(false));
+    }
+
+    @Test
+    void quietSheetsPrintNothingButErrors(@TempDir Path tmp) throws Exception {
+        Path bad = tmp.resolve("bad.yaml");
+        Files.writeString(bad, "format: 1\ntitle: [\n");
+        InProcess.Run r = run("sheet", "--quiet", SAMPLES.resolve("01-main-switchboard-incomer.yaml").toString(),
+                bad.toString(), "-o", tmp.resolve("out").toString());
+        assertThat(r.code(), is(ExitCodes.BAD_INPUT));
+        assertThat(r.out(), is(""));
+        assertThat(r.err(), containsString(bad + ":"));
+    }
+
+    @Test
+    void helpListsTheAllowedValuesAndCompletionCoversEveryCommand() {
+        assertThat(run("withstand", "--help").out(), containsString("copper, aluminium"));
+        assertThat(run("sheet", "--help").out(), containsString("svg, png, pdf"));
+        InProcess.Run c = run("completion");
+        assertThat(c.code(), is(ExitCodes.PASS));
+        for (String command : List.of("sheet", "check", "withstand", "design", "faults")) {
+            assertThat(c.out(), containsString(command));
+        }
+        assertThat(c.out(), containsString("--recursive"));
+        InProcess.Run j = run("withstand", "--conductor", "copper", "--insulation", "xlpe", "--size", "70", "--json");
+        assertThat(j.err(), j.code(), is(ExitCodes.PASS));
+        assertThat(j.out(), containsString("\"format\" : 1"));
+    }
 }

@@ -26,10 +26,22 @@ public final class InProcess {
      * @return what it did
      */
     public static Run run(String... args) {
+        return withInput("", args);
+    }
+
+    /**
+     * Runs the command line with a text on standard input.
+     *
+     * @param stdin the text
+     * @param args the arguments
+     * @return what it did
+     */
+    public static Run withInput(String stdin, String... args) {
         ByteArrayOutputStream out = new ByteArrayOutputStream();
         ByteArrayOutputStream err = new ByteArrayOutputStream();
-        int code = Cli.run(new PrintStream(out, true, StandardCharsets.UTF_8),
-                new PrintStream(err, true, StandardCharsets.UTF_8), args);
+        int code = Cli.run(new java.io.ByteArrayInputStream(stdin.getBytes(StandardCharsets.UTF_8)),
+                new PrintStream(out, true, StandardCharsets.UTF_8), new PrintStream(err, true, StandardCharsets.UTF_8),
+                args);
         return new Run(code, out.toString(StandardCharsets.UTF_8), err.toString(StandardCharsets.UTF_8));
     }
 }
