@@ -1,5 +1,7 @@
 package coordination.core.study;
 
+import java.io.Serializable;
+
 /**
  * One problem in a study file.
  *
@@ -9,7 +11,7 @@ package coordination.core.study;
  * @param path the key path, e.g. {@code devices[2].stages[0].pickup_a}, or empty for the document
  * @param message what is wrong, with the value found and the rule
  */
-public record Problem(String file, int line, int column, String path, String message) {
+public record Problem(String file, int line, int column, String path, String message) implements Serializable {
 
     /**
      * The problem as {@code FILE:LINE:COLUMN: path: message}, on one line: any control character

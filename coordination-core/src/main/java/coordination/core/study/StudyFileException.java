@@ -6,7 +6,8 @@ import java.util.List;
 /** A study file that cannot be read; carries every problem found, each with its location and key. */
 public final class StudyFileException extends CoordinationException {
     private static final long serialVersionUID = 1L;
-    private final transient List<Problem> problems;
+    /** An array, not a list, so that the problems survive serialisation (a batch engine's trip between machines). */
+    private final Problem[] problems;
 
     /**
      * Creates the exception.
@@ -15,11 +16,11 @@ public final class StudyFileException extends CoordinationException {
      */
     public StudyFileException(List<Problem> problems) {
         super(problems.isEmpty() ? "invalid study" : problems.get(0).toString());
-        this.problems = List.copyOf(problems);
+        this.problems = problems.toArray(Problem[]::new);
     }
 
     /** @return every problem found, in file order */
     public List<Problem> problems() {
-        return problems;
+        return List.of(problems);
     }
 }

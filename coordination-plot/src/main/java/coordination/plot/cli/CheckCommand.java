@@ -47,6 +47,10 @@ final class CheckCommand implements Callable<Integer> {
     @Option(names = "--json", description = "print the JSON report (one study) or a list of reports")
     boolean json;
 
+    @Option(names = "--shard", paramLabel = "I/N", description = "check only the I-th of N shares of the studies"
+            + " (1 <= I <= N; every N-th file in the order listed), so that N jobs share a batch")
+    String shard;
+
     @Option(names = {"-r", "--recursive"}, description = "search folders in their subfolders too (hidden ones are"
             + " skipped)")
     boolean recursive;
@@ -101,6 +105,11 @@ final class CheckCommand implements Callable<Integer> {
             err.println("coordination check: no study files (*.yaml) in " + inputs);
             return ExitCodes.BAD_INPUT;
         }
+        // a share may be empty when there are more jobs than studies: not a mistake
+        files = StudyInputs.shard(files, shard, "check", err);
+        if (files == null) {
+            return ExitCodes.BAD_INPUT;
+        }
         boolean invalid = false;
         boolean failed = false;
         List<StudyReport> reports = new ArrayList<>();
@@ -129,7 +138,7 @@ final class CheckCommand implements Callable<Integer> {
         if (json) {
             if (files.size() == 1 && reports.size() == 1) {
                 out.print(runs.isEmpty() ? ReportWriter.write(reports.get(0)) : ReportWriter.write(runs.get(0)));
-            } else if (files.size() > 1) {
+            } else if (files.size() != 1) {
                 // several files: the list form, with the studies that could not be read in not_read
                 out.print(sensitivity == null ? ReportWriter.write(reports, notRead, !failed && !invalid)
                         : ReportWriter.writeSensitivities(runs, notRead, !failed && !invalid));

@@ -8,12 +8,14 @@ import coordination.plot.sheet.SheetWriter;
 import java.io.IOException;
 import java.io.InputStream;
 import java.io.PrintStream;
+import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.EnumSet;
 import java.util.HashMap;
 import java.util.List;
 import java.util.Map;
+import java.util.Optional;
 import java.util.Set;
 import java.util.concurrent.Callable;
 import java.util.concurrent.ExecutionException;
@@ -54,6 +56,15 @@ final class SheetCommand implements Callable<Integer> {
             + " skipped)")
     boolean recursive;
 
+    @Option(names = "--incremental", description = "draw only the studies that changed since the last"
+            + " --incremental run into this folder: a digest of each study, the formats, the resolution and the tool"
+            + " is kept in OUTDIR/" + OutputCache.FILE)
+    boolean incremental;
+
+    @Option(names = "--shard", paramLabel = "I/N", description = "draw only the I-th of N shares of the studies"
+            + " (1 <= I <= N; every N-th file in the order listed), so that N jobs share a batch")
+    String shard;
+
     @Option(names = {"-q", "--quiet"}, description = "no progress bar and no summary; errors still go to standard"
             + " error, and the exit code tells the verdict")
     boolean quiet;
@@ -84,7 +95,15 @@ final class SheetCommand implements Callable<Integer> {
         }
     }
 
-    private record Outcome(Path file, List<Problem> problems, Verdict verdict, String error, int written) {
+    /**
+     * What became of one study: its verdict, errors and files, and for the cache whether it was
+     * left as it was and the digest of its inputs.
+     */
+    private record Outcome(Path file, List<Problem> problems, Verdict verdict, String error, List<String> written,
+            boolean unchanged, String digest) {
+        Outcome(Path file, List<Problem> problems, Verdict verdict, String error) {
+            this(file, problems, verdict, error, List.of(), false, null);
+        }
     }
 
     @Override
@@ -108,6 +127,11 @@ final class SheetCommand implements Callable<Integer> {
         }
         if (files.isEmpty()) {
             err.println("coordination sheet: no study files (*.yaml) in " + inputs);
+            return ExitCodes.BAD_INPUT;
+        }
+        // a share may be empty when there are more jobs than studies: not a mistake
+        files = StudyInputs.shard(files, shard, "sheet", err);
+        if (files == null) {
             return ExitCodes.BAD_INPUT;
         }
         // every output name, and the study that writes it: two studies writing one name, or a study
@@ -137,10 +161,13 @@ final class SheetCommand implements Callable<Integer> {
         }
         ExecutorService pool = Executors.newFixedThreadPool(Math.max(1, Math.min(threads, files.size())));
         List<Future<Outcome>> futures = new ArrayList<>();
+        OutputCache cache = incremental ? OutputCache.load(output) : null;
+        String tool = incremental ? OutputCache.tool() : null;
         for (Path f : files) {
             String why = refused.get(f);
-            futures.add(pool.submit(() -> why != null ? new Outcome(f, List.of(), Verdict.NOT_READ, why, 0)
-                    : process(f, chosen)));
+            futures.add(pool.submit(() -> why != null ? new Outcome(f, List.of(), Verdict.NOT_READ, why)
+                    : cache != null && !f.equals(StudyInputs.STDIN) ? incremental(f, chosen, cache, tool)
+                    : process(f, chosen, null)));
         }
         Progress progress = new Progress(quiet ? null : err, files.size());
         List<Outcome> outcomes = new ArrayList<>();
@@ -166,11 +193,30 @@ final class SheetCommand implements Callable<Integer> {
             pool.shutdownNow();
             progress.done();
         }
+        int unchanged = 0;
+        if (cache != null) {
+            for (Outcome o : outcomes) {
+                String base = StudyInputs.baseName(o.file());
+                unchanged += o.unchanged() ? 1 : 0;
+                if (o.digest() != null && (o.verdict() == Verdict.PASS || o.verdict() == Verdict.FAIL)) {
+                    cache.put(base, new OutputCache.Entry(o.digest(), o.verdict() == Verdict.PASS, o.written()));
+                } else if (!o.file().equals(StudyInputs.STDIN)) {
+                    cache.forget(base);
+                }
+            }
+            try {
+                cache.save(output);
+            } catch (IOException e) {
+                // the sheets are written; the next run only draws more than it needs to
+                err.println(TextRules.printable(output.resolve(OutputCache.FILE).toString()) + ": cannot write the"
+                        + " cache: " + StudyInputs.reason(e) + " - the next --incremental run draws everything");
+            }
+        }
         Map<Verdict, List<String>> byVerdict = new java.util.EnumMap<>(Verdict.class);
         int written = 0;
         for (Outcome o : outcomes) {
             byVerdict.computeIfAbsent(o.verdict(), k -> new ArrayList<>()).add(TextRules.printable(o.file().toString()));
-            written += o.written();
+            written += o.unchanged() ? 0 : o.written().size();
         }
         if (quiet) {
             return exitCode(byVerdict);
@@ -178,7 +224,8 @@ final class SheetCommand implements Callable<Integer> {
         out.println("sheets: " + outcomes.size() + " studies, " + count(byVerdict, Verdict.PASS) + " pass, "
                 + count(byVerdict, Verdict.FAIL) + " fail, " + (count(byVerdict, Verdict.NOT_READ)
                 + count(byVerdict, Verdict.INTERNAL_ERROR)) + " not read; " + written + " files in "
-                + TextRules.printable(output.toString()));
+                + TextRules.printable(output.toString()) + (unchanged > 0 ? "; " + unchanged + " unchanged, not"
+                + " drawn again" : ""));
         for (Verdict v : List.of(Verdict.FAIL, Verdict.NOT_READ, Verdict.INTERNAL_ERROR)) {
             if (byVerdict.containsKey(v)) {
                 out.println("  " + v.word + ": " + String.join(", ", byVerdict.get(v)));
@@ -199,11 +246,28 @@ final class SheetCommand implements Callable<Integer> {
         return byVerdict.getOrDefault(v, List.of()).size();
     }
 
-    private Outcome process(Path file, Set<OutputFormat> chosen) {
+    /** A study drawn again only if its inputs changed or one of its files is gone. */
+    private Outcome incremental(Path file, Set<OutputFormat> chosen, OutputCache cache, String tool) {
+        byte[] bytes;
+        try {
+            bytes = Files.readAllBytes(file);
+        } catch (IOException e) {
+            return process(file, chosen, null);
+        }
+        String digest = OutputCache.digest(bytes, tool, chosen, dpi);
+        Optional<OutputCache.Entry> last = cache.unchanged(StudyInputs.baseName(file), digest, output);
+        if (last.isPresent()) {
+            return new Outcome(file, List.of(), last.get().pass() ? Verdict.PASS : Verdict.FAIL, null,
+                    last.get().files(), true, digest);
+        }
+        return process(file, chosen, digest);
+    }
+
+    private Outcome process(Path file, Set<OutputFormat> chosen, String digest) {
         try {
             StudyInputs.Loaded l = StudyInputs.load(file, in);
             if (l.study() == null) {
-                return new Outcome(file, l.problems(), Verdict.NOT_READ, null, 0);
+                return new Outcome(file, l.problems(), Verdict.NOT_READ, null);
             }
             StudyReport report = StudyReport.evaluate(l.study());
             Map<String, byte[]> files = SheetWriter.render(l.study(), report, chosen, dpi);
@@ -211,12 +275,13 @@ final class SheetCommand implements Callable<Integer> {
                 SheetWriter.write(output, files);
             } catch (IOException e) {
                 return new Outcome(file, List.of(), Verdict.NOT_READ, "cannot write to " + output + ": "
-                        + e.getMessage(), 0);
+                        + e.getMessage());
             }
-            return new Outcome(file, List.of(), report.pass() ? Verdict.PASS : Verdict.FAIL, null, files.size());
+            return new Outcome(file, List.of(), report.pass() ? Verdict.PASS : Verdict.FAIL, null,
+                    List.copyOf(files.keySet()), false, digest);
         } catch (IOException | RuntimeException | OutOfMemoryError | StackOverflowError e) {
             // one study's defect must not abandon the others; nothing of it was written
-            return new Outcome(file, List.of(), Verdict.INTERNAL_ERROR, "internal error: " + e, 0);
+            return new Outcome(file, List.of(), Verdict.INTERNAL_ERROR, "internal error: " + e);
         }
     }
 

@@ -97,6 +97,35 @@ final class StudyInputs {
         return false;
     }
 
+    /**
+     * The share of the files one of N jobs takes: every N-th, from the I-th, in the order listed.
+     *
+     * @param files the files, in a stable order
+     * @param spec {@code I/N}, or null for all
+     * @param command the command's name, for the message
+     * @param err where a bad spec is reported
+     * @return the share, or null if the spec is bad
+     */
+    static List<Path> shard(List<Path> files, String spec, String command, PrintStream err) {
+        if (spec == null) {
+            return files;
+        }
+        java.util.regex.Matcher m = java.util.regex.Pattern.compile("\\s*(\\d{1,6})\\s*/\\s*(\\d{1,6})\\s*")
+                .matcher(spec);
+        int i = m.matches() ? Integer.parseInt(m.group(1)) : 0;
+        int n = m.matches() ? Integer.parseInt(m.group(2)) : 0;
+        if (!(n >= 1 && i >= 1 && i <= n)) {
+            err.println("coordination " + command + ": --shard: found '" + TextRules.printable(spec)
+                    + "' - give I/N with 1 <= I <= N, e.g. 2/8");
+            return null;
+        }
+        List<Path> share = new ArrayList<>();
+        for (int k = i - 1; k < files.size(); k += n) {
+            share.add(files.get(k));
+        }
+        return share;
+    }
+
     /** A study file's name ends in .yaml or .yml, in any case. */
     static boolean isStudyName(String name) {
         String n = name.toLowerCase(java.util.Locale.ROOT);

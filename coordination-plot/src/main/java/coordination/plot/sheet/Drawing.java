@@ -11,6 +11,7 @@ import java.awt.image.BufferedImage;
 import java.io.ByteArrayOutputStream;
 import java.io.IOException;
 import java.io.StringWriter;
+import java.lang.ref.SoftReference;
 import java.nio.charset.StandardCharsets;
 import java.security.MessageDigest;
 import java.security.NoSuchAlgorithmException;
@@ -170,14 +171,19 @@ public final class Drawing {
         return encodePng(image, dpi);
     }
 
-    /** One reusable canvas per thread: a sheet at 150 dpi is 9 MB, and batch runs draw thousands. */
-    private static final ThreadLocal<BufferedImage> CANVAS = new ThreadLocal<>();
+    /**
+     * One reusable canvas per thread: a sheet at 150 dpi is 9 MB, and batch runs draw thousands.
+     * Held softly, so that the threads of a caller's pool do not pin it once memory is wanted
+     * elsewhere.
+     */
+    private static final ThreadLocal<SoftReference<BufferedImage>> CANVAS = new ThreadLocal<>();
 
     private static BufferedImage canvas(int w, int h) {
-        BufferedImage b = CANVAS.get();
+        SoftReference<BufferedImage> held = CANVAS.get();
+        BufferedImage b = held == null ? null : held.get();
         if (b == null || b.getWidth() != w || b.getHeight() != h) {
             b = new BufferedImage(w, h, BufferedImage.TYPE_3BYTE_BGR);
-            CANVAS.set(b);
+            CANVAS.set(new SoftReference<>(b));
         }
         return b;
     }

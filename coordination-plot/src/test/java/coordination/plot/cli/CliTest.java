@@ -329,4 +329,48 @@ class CliTest {
         assertThat(j.err(), j.code(), is(ExitCodes.PASS));
         assertThat(j.out(), containsString("\"format\" : 1"));
     }
+
+    @Test
+    void incrementalRunsDrawOnlyWhatChangedOrWentMissing(@TempDir Path tmp) throws Exception {
+        Path in = Files.createDirectories(tmp.resolve("in"));
+        Files.copy(SAMPLES.resolve("01-main-switchboard-incomer.yaml"), in.resolve("a.yaml"));
+        Files.copy(SAMPLES.resolve("05-blower-feeder-undersized.yaml"), in.resolve("b.yaml"));
+        Path out = tmp.resolve("out");
+        String[] args = {"sheet", in.toString(), "-o", out.toString(), "--format", "svg", "--incremental"};
+        InProcess.Run first = run(args);
+        assertThat(first.code(), is(ExitCodes.CHECK_FAILED));
+        assertThat(first.out(), containsString("; 4 files in "));
+        byte[] before = Files.readAllBytes(out.resolve("a.svg"));
+        InProcess.Run again = run(args);
+        // the cached verdict still decides the exit code
+        assertThat(again.code(), is(ExitCodes.CHECK_FAILED));
+        assertThat(again.out(), containsString("; 0 files in " + out + "; 2 unchanged, not drawn again"));
+        // an edit or a lost file: drawn again; then other formats of the same studies
+        Files.writeString(in.resolve("a.yaml"), Files.readString(in.resolve("a.yaml")) + "\n# edited\n");
+        Files.delete(out.resolve("b.report.json"));
+        InProcess.Run third = run(args);
+        assertThat(third.out(), containsString("; 4 files in "));
+        assertThat(Files.readAllBytes(out.resolve("a.svg")), is(before));
+        assertThat(run("sheet", in.toString(), "-o", out.toString(), "--format", "svg,png", "--incremental").out(),
+                containsString("; 6 files in "));
+        // a cache that cannot be read is no cache
+        Files.writeString(out.resolve(OutputCache.FILE), "garbage\n");
+        assertThat(run(args).out(), containsString("; 4 files in "));
+    }
+
+    @Test
+    void shardsTakeEveryNthStudyAndTogetherTakeThemAll() {
+        List<String> seen = new java.util.ArrayList<>();
+        for (int i = 1; i <= 3; i++) {
+            InProcess.Run r = run("check", "--shard", i + "/3", SAMPLES.toString());
+            r.out().lines().filter(l -> l.matches("^0[0-9]-.*")).map(l -> l.substring(0, 2)).forEach(seen::add);
+        }
+        assertThat(seen.stream().sorted().toList(), is(List.of("01", "02", "03", "04", "05", "06", "07")));
+        assertThat(run("check", "--shard", "1/3", SAMPLES.toString()).out(), containsString("04-"));
+        InProcess.Run empty = run("check", "--shard", "9/9", SAMPLES.toString());
+        assertThat(empty.code(), is(ExitCodes.PASS));
+        InProcess.Run bad = run("sheet", "--shard", "4/3", SAMPLES.toString(), "-o", "never");
+        assertThat(bad.code(), is(ExitCodes.BAD_INPUT));
+        assertThat(bad.err(), containsString("--shard: found '4/3' - give I/N with 1 <= I <= N"));
+    }
 }
