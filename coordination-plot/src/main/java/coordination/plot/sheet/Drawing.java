@@ -115,7 +115,7 @@ public final class Drawing {
     private static byte[] svg(double w, double h, Consumer<Graphics2D> painter) throws IOException {
         Document doc;
         try {
-            doc = DocumentBuilderFactory.newInstance().newDocumentBuilder().getDOMImplementation()
+            doc = XML.get().documents.newDocumentBuilder().getDOMImplementation()
                     .createDocument(SVG_NS, "svg", null);
         } catch (ParserConfigurationException e) {
             throw new IllegalStateException("the platform's XML parser cannot create a document", e);
@@ -140,7 +140,7 @@ public final class Drawing {
         // breaks inside tags, and no document type that a browser would fetch
         StringWriter out = new StringWriter();
         try {
-            Transformer t = TransformerFactory.newInstance().newTransformer();
+            Transformer t = XML.get().transformers.newTransformer();
             t.setOutputProperty(OutputKeys.ENCODING, "UTF-8");
             t.transform(new DOMSource(root), new StreamResult(out));
         } catch (TransformerException e) {
@@ -150,6 +150,13 @@ public final class Drawing {
     }
 
     private static final String SVG_NS = "http://www.w3.org/2000/svg";
+
+    /** The platform's XML factories, looked up once per thread: the lookup costs more than a sheet's writing. */
+    private record Xml(DocumentBuilderFactory documents, TransformerFactory transformers) {
+    }
+
+    private static final ThreadLocal<Xml> XML = ThreadLocal.withInitial(() -> new Xml(
+            DocumentBuilderFactory.newInstance(), TransformerFactory.newInstance()));
 
     private static String number(double v) {
         double r = Math.round(v * 100) / 100.0;

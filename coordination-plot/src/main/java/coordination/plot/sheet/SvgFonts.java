@@ -5,6 +5,8 @@ import java.io.ByteArrayOutputStream;
 import java.io.IOException;
 import java.io.InputStream;
 import java.util.Base64;
+import java.util.LinkedHashMap;
+import java.util.Map;
 import java.util.TreeSet;
 import java.util.regex.Matcher;
 import java.util.regex.Pattern;
@@ -53,8 +55,34 @@ final class SvgFonts {
         return svg.substring(0, end) + style + svg.substring(end);
     }
 
+    /**
+     * Subsets already made, by face and characters: sheets of one batch mostly use the same
+     * characters, and parsing a face costs more than drawing a sheet. Bounded, least recently used.
+     */
+    private static final Map<String, String> SUBSETS = java.util.Collections.synchronizedMap(
+            new LinkedHashMap<>(64, 0.75f, true) {
+                private static final long serialVersionUID = 1L;
+
+                @Override
+                protected boolean removeEldestEntry(Map.Entry<String, String> eldest) {
+                    return size() > 64;
+                }
+            });
+
     private static void face(StringBuilder style, String file, String weight, TreeSet<Integer> used)
             throws IOException {
+        String key = file + ":" + used;
+        String subset = SUBSETS.get(key);
+        if (subset == null) {
+            subset = subset(file, used);
+            SUBSETS.put(key, subset);
+        }
+        style.append("@font-face{font-family:\"").append(coordination.plot.chart.Palette.FONT_FAMILY)
+                .append("\";font-weight:").append(weight).append(";src:url(data:font/ttf;base64,")
+                .append(subset).append(") format(\"truetype\");}");
+    }
+
+    private static String subset(String file, TreeSet<Integer> used) throws IOException {
         byte[] bytes;
         try (InputStream in = Fonts.open(file)) {
             bytes = in.readAllBytes();
@@ -67,9 +95,7 @@ final class SvgFonts {
             subset.addAll(used);
             subset.writeToStream(out);
         }
-        style.append("@font-face{font-family:\"").append(coordination.plot.chart.Palette.FONT_FAMILY)
-                .append("\";font-weight:").append(weight).append(";src:url(data:font/ttf;base64,")
-                .append(Base64.getEncoder().encodeToString(out.toByteArray())).append(") format(\"truetype\");}");
+        return Base64.getEncoder().encodeToString(out.toByteArray());
     }
 
     private static String unescape(String s) {
