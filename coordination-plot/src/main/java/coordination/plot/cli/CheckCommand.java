@@ -21,6 +21,7 @@ import java.util.Stack;
 import java.util.regex.Pattern;
 import java.util.concurrent.Callable;
 import picocli.CommandLine.Command;
+import picocli.CommandLine.Mixin;
 import picocli.CommandLine.IParameterConsumer;
 import picocli.CommandLine.Model.ArgSpec;
 import picocli.CommandLine.Model.CommandSpec;
@@ -47,13 +48,8 @@ final class CheckCommand implements Callable<Integer> {
     @Option(names = "--json", description = "print the JSON report (one study) or a list of reports")
     boolean json;
 
-    @Option(names = "--shard", paramLabel = "I/N", description = "check only the I-th of N shares of the studies"
-            + " (1 <= I <= N; every N-th file in the order listed), so that N jobs share a batch")
-    String shard;
-
-    @Option(names = {"-r", "--recursive"}, description = "search folders in their subfolders too (hidden ones are"
-            + " skipped)")
-    boolean recursive;
+    @Mixin
+    StudySelection selection = new StudySelection();
 
     @Option(names = "--sensitivity", arity = "0..1", paramLabel = "MIN,MAX",
             parameterConsumer = FactorsConsumer.class,
@@ -97,16 +93,7 @@ final class CheckCommand implements Callable<Integer> {
 
     @Override
     public Integer call() {
-        List<Path> files = StudyInputs.collect(inputs, recursive, err);
-        if (files == null) {
-            return ExitCodes.BAD_INPUT;
-        }
-        if (files.isEmpty()) {
-            err.println("coordination check: no study files (*.yaml) in " + inputs);
-            return ExitCodes.BAD_INPUT;
-        }
-        // a share may be empty when there are more jobs than studies: not a mistake
-        files = StudyInputs.shard(files, shard, "check", err);
+        List<Path> files = selection.files(inputs, "check", err);
         if (files == null) {
             return ExitCodes.BAD_INPUT;
         }

@@ -23,6 +23,7 @@ import java.util.concurrent.ExecutorService;
 import java.util.concurrent.Executors;
 import java.util.concurrent.Future;
 import picocli.CommandLine.Command;
+import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Option;
 import picocli.CommandLine.Parameters;
 
@@ -52,18 +53,13 @@ final class SheetCommand implements Callable<Integer> {
     @Option(names = "--threads", paramLabel = "N", description = "worker threads (default: all cores)")
     int threads = Runtime.getRuntime().availableProcessors();
 
-    @Option(names = {"-r", "--recursive"}, description = "search folders in their subfolders too (hidden ones are"
-            + " skipped)")
-    boolean recursive;
+    @Mixin
+    StudySelection selection = new StudySelection();
 
     @Option(names = "--incremental", description = "draw only the studies that changed since the last"
             + " --incremental run into this folder: a digest of each study, the formats, the resolution and the tool"
             + " is kept in OUTDIR/" + OutputCache.FILE)
     boolean incremental;
-
-    @Option(names = "--shard", paramLabel = "I/N", description = "draw only the I-th of N shares of the studies"
-            + " (1 <= I <= N; every N-th file in the order listed), so that N jobs share a batch")
-    String shard;
 
     @Option(names = {"-q", "--quiet"}, description = "no progress bar and no summary; errors still go to standard"
             + " error, and the exit code tells the verdict")
@@ -121,16 +117,7 @@ final class SheetCommand implements Callable<Integer> {
             err.println("coordination sheet: --dpi: found " + dpi + " - must be from 72 to 600");
             return ExitCodes.BAD_INPUT;
         }
-        List<Path> files = StudyInputs.collect(inputs, recursive, err);
-        if (files == null) {
-            return ExitCodes.BAD_INPUT;
-        }
-        if (files.isEmpty()) {
-            err.println("coordination sheet: no study files (*.yaml) in " + inputs);
-            return ExitCodes.BAD_INPUT;
-        }
-        // a share may be empty when there are more jobs than studies: not a mistake
-        files = StudyInputs.shard(files, shard, "sheet", err);
+        List<Path> files = selection.files(inputs, "sheet", err);
         if (files == null) {
             return ExitCodes.BAD_INPUT;
         }
