@@ -10,8 +10,11 @@ import java.io.Serializable;
  * @param column 1-based column
  * @param path the key path, e.g. {@code devices[2].stages[0].pickup_a}, or empty for the document
  * @param message what is wrong, with the value found and the rule
+ * @serial exclude its serial form is its components, documented above
  */
 public record Problem(String file, int line, int column, String path, String message) implements Serializable {
+    /** The serial form's version. */
+    private static final long serialVersionUID = 1L;
 
     /**
      * The problem as {@code FILE:LINE:COLUMN: path: message}, on one line: any control character
