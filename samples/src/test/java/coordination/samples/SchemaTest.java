@@ -14,6 +14,7 @@ import com.networknt.schema.SpecVersion;
 import com.networknt.schema.ValidationMessage;
 import java.nio.file.Files;
 import java.nio.file.Path;
+import java.util.List;
 import java.util.Set;
 import java.util.stream.Stream;
 import org.junit.jupiter.api.Test;
@@ -83,6 +84,38 @@ class SchemaTest {
         Set<ValidationMessage> errors = schema("report.schema.json").validate(new ObjectMapper().readTree(
                 coordination.core.study.ReportWriter.write(run)));
         assertThat(errors.toString(), errors, empty());
+    }
+
+    /** design --json of every sample fits its schema. */
+    @ParameterizedTest
+    @MethodSource("coordination.samples.SamplesTest#studies")
+    void designSchemaAcceptsTheProposalsOfEverySample(Path file) throws Exception {
+        String json = coordination.core.study.ReportWriter.write(coordination.core.study.StudyDesign.of(
+                coordination.core.study.StudyReader.read(file)));
+        Set<ValidationMessage> errors = schema("design.schema.json").validate(new ObjectMapper().readTree(json));
+        assertThat(file + ": " + errors, errors, empty());
+    }
+
+    /** withstand --json and faults --json fit theirs, and a wrong key is refused. */
+    @Test
+    void withstandAndFaultsSchemasAcceptWhatTheCommandsPrint() throws Exception {
+        for (String[] args : List.of(new String[] {"withstand", "--conductor", "copper", "--insulation", "xlpe", "--json"},
+                new String[] {"withstand", "--conductor", "aluminium", "--insulation", "pvc", "--size", "4/0 AWG",
+                    "--parallel", "2", "--method", "icea", "--json"})) {
+            assertThat(String.join(" ", args), schema("withstand.schema.json").validate(json(args)), empty());
+        }
+        JsonNode faults = json("faults", "--json", "07-works-network.yaml");
+        assertThat(schema("faults.schema.json").validate(faults), empty());
+        ((com.fasterxml.jackson.databind.node.ObjectNode) faults).put("extra", 1);
+        assertThat(schema("faults.schema.json").validate(faults).isEmpty(), is(false));
+    }
+
+    private static JsonNode json(String... args) throws Exception {
+        java.io.ByteArrayOutputStream out = new java.io.ByteArrayOutputStream();
+        int code = coordination.plot.cli.Cli.run(new java.io.PrintStream(out, true, "UTF-8"),
+                new java.io.PrintStream(new java.io.ByteArrayOutputStream(), true, "UTF-8"), args);
+        assertThat(String.join(" ", args), code, is(0));
+        return new ObjectMapper().readTree(out.toString(java.nio.charset.StandardCharsets.UTF_8));
     }
 
     /** What check --json prints for several files, one of them unreadable, fits the schema's list form. */

@@ -205,8 +205,8 @@ public final class ReportWriter {
     public static String write(WithstandTable table) {
         CableThermalLimit first = table.rows().get(0).cable();
         JsonOut j = new JsonOut().startObject();
-        j.integer("format", StudyReport.FORMAT).text("conductor", first.material().key()).text("insulation", first.insulation().key())
-                .text("method", first.method().key()).startArray("sizes");
+        j.integer("format", StudyReport.FORMAT).text("conductor", first.material().key())
+                .text("insulation", first.insulation().key()).text("method", first.method().key()).startArray("sizes");
         double[] times = table.timesSeconds();
         for (WithstandTable.Row row : table.rows()) {
             CableThermalLimit c = row.cable();

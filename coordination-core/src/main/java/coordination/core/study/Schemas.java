@@ -6,9 +6,9 @@ import java.io.UncheckedIOException;
 import java.nio.charset.StandardCharsets;
 
 /**
- * The JSON Schemas of the study file and of the report, as shipped in this jar: the same files as
- * {@code spec/study.schema.json} and {@code spec/report.schema.json}, for tools that validate
- * without the repository at hand.
+ * The JSON Schemas of the study file, the report and the other JSON outputs, as shipped in this
+ * jar: the same files as {@code spec/*.schema.json}, for tools that validate without the
+ * repository at hand.
  */
 public final class Schemas {
     private Schemas() {
@@ -22,6 +22,21 @@ public final class Schemas {
     /** @return the report schema (JSON Schema draft 2020-12), as text */
     public static String report() {
         return read("report.schema.json");
+    }
+
+    /** @return the schema of {@code design --json} (JSON Schema draft 2020-12), as text */
+    public static String design() {
+        return read("design.schema.json");
+    }
+
+    /** @return the schema of {@code withstand --json}, as text */
+    public static String withstand() {
+        return read("withstand.schema.json");
+    }
+
+    /** @return the schema of {@code faults --json}, as text */
+    public static String faults() {
+        return read("faults.schema.json");
     }
 
     private static String read(String name) {

@@ -13,5 +13,9 @@ class SchemasTest {
     void theShippedSchemasAreTheSpecification() throws Exception {
         assertThat(Schemas.study(), is(Files.readString(Path.of("../spec/study.schema.json"), StandardCharsets.UTF_8)));
         assertThat(Schemas.report(), is(Files.readString(Path.of("../spec/report.schema.json"), StandardCharsets.UTF_8)));
+        assertThat(Schemas.design(), is(Files.readString(Path.of("../spec/design.schema.json"), StandardCharsets.UTF_8)));
+        assertThat(Schemas.withstand(), is(Files.readString(Path.of("../spec/withstand.schema.json"),
+                StandardCharsets.UTF_8)));
+        assertThat(Schemas.faults(), is(Files.readString(Path.of("../spec/faults.schema.json"), StandardCharsets.UTF_8)));
     }
 }
