@@ -192,7 +192,10 @@ final class SheetCommand implements Callable<Integer> {
                 }
             }
             try {
-                cache.save(output);
+                // where the folder could not be made, nothing was drawn and that error is already told
+                if (Files.isDirectory(output)) {
+                    cache.save(output);
+                }
             } catch (IOException e) {
                 // the sheets are written; the next run only draws more than it needs to
                 err.println(TextRules.printable(output.resolve(OutputCache.FILE).toString()) + ": cannot write the"
