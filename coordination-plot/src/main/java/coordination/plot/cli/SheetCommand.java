@@ -264,8 +264,10 @@ final class SheetCommand implements Callable<Integer> {
             try {
                 SheetWriter.write(output, files);
             } catch (IOException e) {
-                return new Outcome(file, List.of(), Verdict.NOT_READ, "cannot write to " + output + ": "
-                        + e.getMessage());
+                String why = Files.exists(output) && !Files.isDirectory(output)
+                        ? "it is a file, not a folder - give a folder for the sheets" : StudyInputs.reason(e);
+                return new Outcome(file, List.of(), Verdict.NOT_READ, "cannot write to "
+                        + TextRules.printable(output.toString()) + ": " + why);
             }
             return new Outcome(file, List.of(), report.pass() ? Verdict.PASS : Verdict.FAIL, null,
                     List.copyOf(files.keySet()), false, digest);

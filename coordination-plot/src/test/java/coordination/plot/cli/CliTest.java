@@ -153,7 +153,7 @@ class CliTest {
         Files.writeString(out, "not a folder");
         InProcess.Run r = run("sheet", SAMPLES.resolve("02-filter-house-fuse.yaml").toString(), "-o", out.toString());
         assertThat(r.code(), is(ExitCodes.BAD_INPUT));
-        assertThat(r.err(), containsString("cannot write to " + out));
+        assertThat(r.err(), containsString("cannot write to " + out + ": it is a file, not a folder"));
         assertThat(Files.readString(out), is("not a folder"));
     }
 
