@@ -30,10 +30,38 @@ import org.apache.commons.math3.complex.Complex;
  * @param network the network
  * @param levels the levels at every bus (in the network's order), then at both ends of every cable
  * @param parents the branch feeding each bus from the source's side, absent for source buses
- * @param impedances each bus's source impedance at its own voltage, {R max, X max, R min, X min} in Ω
+ * @param impedances each bus's impedance from the source, at the bus's own voltage
  */
 public record FaultLevels(Network network, List<FaultLevel> levels, Map<String, Network.Branch> parents,
-        Map<String, double[]> impedances) {
+        Map<String, SourceImpedance> impedances) {
+
+    /**
+     * The impedance from the source to a bus, at the bus's voltage, in Ω.
+     *
+     * @param rMaxOhm resistance for the maximum currents (conductors at 20 °C, KT applied)
+     * @param xMaxOhm reactance for the maximum currents
+     * @param rMinOhm resistance for the minimum currents (conductors at their end temperature)
+     * @param xMinOhm reactance for the minimum currents
+     */
+    public record SourceImpedance(double rMaxOhm, double xMaxOhm, double rMinOhm, double xMinOhm) {
+    }
+
+    /**
+     * The levels of a fault beyond a bus, through an added series impedance: a point inside a
+     * branch. The bus's voltage and voltage factors apply.
+     *
+     * @param bus the bus the fault is fed from, one of this network's
+     * @param at the point's name in the level
+     * @param rMaxOhm added resistance for the maximum currents, Ω
+     * @param rMinOhm added resistance for the minimum currents, Ω
+     * @param xOhm added reactance, Ω
+     * @return the levels there
+     */
+    public FaultLevel beyond(Bus bus, String at, double rMaxOhm, double rMinOhm, double xOhm) {
+        SourceImpedance z = impedances.get(bus.id());
+        return level(at, bus, new Complex(z.rMaxOhm() + rMaxOhm, z.xMaxOhm() + xOhm),
+                new Complex(z.rMinOhm() + rMinOhm, z.xMinOhm() + xOhm));
+    }
 
     /**
      * Copies the collections in.
@@ -41,26 +69,12 @@ public record FaultLevels(Network network, List<FaultLevel> levels, Map<String, 
      * @param network the network
      * @param levels the levels at every bus (in the network's order), then at both ends of every cable
      * @param parents the branch feeding each bus from the source's side, absent for source buses
-     * @param impedances each bus's source impedance at its own voltage, {R max, X max, R min, X min} in Ω
+     * @param impedances each bus's impedance from the source, at the bus's own voltage
      */
     public FaultLevels {
         levels = List.copyOf(levels);
         parents = Collections.unmodifiableMap(new LinkedHashMap<>(parents));
-        Map<String, double[]> z = new LinkedHashMap<>();
-        impedances.forEach((k, v) -> z.put(k, v.clone()));
-        impedances = Collections.unmodifiableMap(z);
-    }
-
-    /**
-     * The impedance from the source to a bus, at the bus's voltage.
-     *
-     * @param bus the bus
-     * @param max the maximum case (else the minimum)
-     * @return {R, X} in Ω
-     */
-    public double[] impedance(String bus, boolean max) {
-        double[] z = impedances.get(bus);
-        return max ? new double[] {z[0], z[1]} : new double[] {z[2], z[3]};
+        impedances = Collections.unmodifiableMap(new LinkedHashMap<>(impedances));
     }
 
     /**
@@ -120,11 +134,11 @@ public record FaultLevels(Network network, List<FaultLevel> levels, Map<String, 
                         l.ik3MinAmps(), l.ik2MinAmps(), l.kappa(), l.ipAmps(), l.rOverX()));
             }
         }
-        Map<String, double[]> impedances = new LinkedHashMap<>();
+        Map<String, SourceImpedance> impedances = new LinkedHashMap<>();
         for (Bus b : network.buses()) {
             Complex a = zMax.get(b.id());
             Complex c = zMin.get(b.id());
-            impedances.put(b.id(), new double[] {a.getReal(), a.getImaginary(), c.getReal(), c.getImaginary()});
+            impedances.put(b.id(), new SourceImpedance(a.getReal(), a.getImaginary(), c.getReal(), c.getImaginary()));
         }
         return new FaultLevels(network, levels, parents, impedances);
     }

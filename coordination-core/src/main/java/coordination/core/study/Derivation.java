@@ -2,7 +2,6 @@ package coordination.core.study;
 
 import coordination.core.Quantities;
 import coordination.core.curve.DeviceKind;
-import coordination.core.margin.CableCheck;
 import coordination.core.margin.DcOffset;
 import coordination.core.margin.GradingRequirement;
 import coordination.core.margin.MarginRequirement;
@@ -236,34 +235,24 @@ final class Derivation {
     private Optional<Study.CableCheckSpec> parallelCheck(CableBranch c, String device,
             String from, MarginRequirement req, Optional<DcOffset> dc) {
         int n = c.parallel();
-        Bus bus = buses().get(from);
-        double[] upMax = levels().impedance(from, true);
-        double[] upMin = levels().impedance(from, false);
-        double len = c.lengthM() / 1000;
-        double rMax = c.rOhmPerKm() * len;
-        double rMin = c.rOhmPerKm() * len * (1 + CableBranch.ALPHA_PER_K
-                * (c.endTemperatureC() - 20));
-        double xz = c.xOhmPerKm() * len;
+        // one conductor's impedance: the branch's is that of all n in parallel
+        double rMax = c.resistanceOhm(20) * n;
+        double rMin = c.resistanceOhm(c.endTemperatureC()) * n;
+        double xOne = c.reactanceOhm() * n;
         DoubleFunction<Study.CableCheckSpec> at = x -> {
             double[] split = parallelFault(n, x);
             double share = split[0];
-            double parallelPart = split[1];
-            double iMax = bus.cMax() * bus.voltageKv() * 1000 / (Math.sqrt(3)
-                    * Math.hypot(upMax[0] + parallelPart * rMax, upMax[1] + parallelPart * xz));
-            double iMin = Math.sqrt(3) / 2 * bus.cMin() * bus.voltageKv() * 1000 / (Math.sqrt(3)
-                    * Math.hypot(upMin[0] + parallelPart * rMin, upMin[1] + parallelPart * xz));
-            return new Study.CableCheckSpec(c.id(), device, req, new Study.CurrentRange(refer(share * iMin, from),
-                    refer(share * iMax, from)), dc, Study.DcSource.FROM_NETWORK, true,
-                    "fault inside one of " + n + " parallel conductors " + (x < 1e-3 ? "at its sending end"
-                    : x > 1 - 1e-3 ? "at its far end" : "at " + Quantities.significant(x, 3)
-                    + " of its length"), share);
+            FaultLevel l = levels().beyond(buses().get(from), c.id(), rMax * split[1], rMin * split[1], xOne * split[1]);
+            return new Study.CableCheckSpec(c.id(), device, req, new Study.CurrentRange(
+                    refer(share * l.ik2MinAmps(), from), refer(share * l.ik3MaxAmps(), from)), dc,
+                    Study.DcSource.FROM_NETWORK, true, "fault inside one of " + n + " parallel conductors "
+                    + (x < 1e-3 ? "at its sending end" : x > 1 - 1e-3 ? "at its far end"
+                    : "at " + Quantities.significant(x, 3) + " of its length"), share);
         };
         Study.StudyCable cable = cables.get(c.id());
         DoubleUnaryOperator margin = x -> {
-            Study.CableCheckSpec spec = at.apply(x);
-            double m = new CableCheck(devices.get(device).referred().referredBy(spec
-                    .conductorShare()), cable.limit().withParallel(1), spec.range().fromAmps(), spec.range().toAmps(),
-                    req, dc.orElse(null)).result().minMarginSeconds();
+            double m = StudyReport.cableCheck(devices.get(device).referred(), cable.limit(), at.apply(x))
+                    .minMarginSeconds();
             return Double.isNaN(m) ? Double.NEGATIVE_INFINITY : m;
         };
         int steps = 20;

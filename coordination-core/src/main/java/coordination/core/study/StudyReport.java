@@ -94,13 +94,26 @@ public record StudyReport(Study study, List<CheckResult> results, List<CheckNote
      * @return the result
      */
     static coordination.core.margin.CableCheckResult cableCheck(Study study, Study.CableCheckSpec cc) {
-        coordination.core.curve.ProtectiveDevice device = study.device(cc.device()).referred();
-        coordination.core.cable.CableThermalLimit limit = study.cable(cc.cable()).limit();
+        return cableCheck(study.device(cc.device()).referred(), study.cable(cc.cable()).limit(), cc);
+    }
+
+    /**
+     * Runs one cable check on a device, already referred to the study's voltage, and its cable.
+     *
+     * @param device the protecting device at the study's voltage
+     * @param limit the cable's limit, all its conductors
+     * @param cc the check
+     * @return the result
+     */
+    static coordination.core.margin.CableCheckResult cableCheck(coordination.core.curve.ProtectiveDevice device,
+            coordination.core.cable.CableThermalLimit limit, Study.CableCheckSpec cc) {
+        coordination.core.curve.ProtectiveDevice seen = device;
+        coordination.core.cable.CableThermalLimit conductor = limit;
         if (cc.conductorShare() != 1.0) {
-            device = device.referredBy(cc.conductorShare());
-            limit = limit.withParallel(1);
+            seen = device.referredBy(cc.conductorShare());
+            conductor = limit.withParallel(1);
         }
-        return new CableCheck(device, limit, cc.range().fromAmps(), cc.range().toAmps(), cc.requirement(),
+        return new CableCheck(seen, conductor, cc.range().fromAmps(), cc.range().toAmps(), cc.requirement(),
                 cc.dcOffset().orElse(null)).result();
     }
 
