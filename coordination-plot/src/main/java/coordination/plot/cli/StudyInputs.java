@@ -69,6 +69,10 @@ final class StudyInputs {
                 } catch (IOException e) {
                     err.println(shown + ": cannot list the folder: " + reason(e));
                     ok = false;
+                } catch (java.io.UncheckedIOException e) {
+                    // a subfolder a recursive search cannot enter: the walk reports it this way
+                    err.println(shown + ": cannot list the folder: " + reason(e.getCause()));
+                    ok = false;
                 }
             } else if (Files.isRegularFile(a)) {
                 files.add(a);

@@ -302,6 +302,19 @@ class CliTest {
         assertThat(r.err(), r.code(), is(ExitCodes.PASS));
         assertThat(r.out(), containsString("one: "));
         assertThat(r.out().contains("two: "), is(false));
+        // a subfolder that cannot be entered is a located error, not a crash
+        Path locked = Files.createDirectories(tmp.resolve("a/locked"));
+        Files.copy(SAMPLES.resolve("01-main-switchboard-incomer.yaml"), locked.resolve("three.yaml"));
+        java.nio.file.Files.setPosixFilePermissions(locked, java.util.Set.of());
+        try {
+            org.junit.jupiter.api.Assumptions.assumeFalse(Files.isReadable(locked), "permissions bite (not root)");
+            InProcess.Run denied = run("check", "--recursive", tmp.toString());
+            assertThat(denied.code(), is(ExitCodes.BAD_INPUT));
+            assertThat(denied.err(), containsString(tmp + ": cannot list the folder: permission denied"));
+        } finally {
+            java.nio.file.Files.setPosixFilePermissions(locked, java.nio.file.attribute.PosixFilePermissions
+                    .fromString("rwx------"));
+        }
     }
 
     @Test
