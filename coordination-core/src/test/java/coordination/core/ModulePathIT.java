@@ -16,7 +16,8 @@ import org.junit.jupiter.api.io.TempDir;
 
 /**
  * A modular application that {@code requires coordination.core}, compiled and run on the module
- * path against the packaged jar: its descriptor must pull in what the reader and the engine use.
+ * path against the packaged jar: its descriptor must pull in what the reader and the engine use, and
+ * its values must cross a serialization round trip there.
  */
 class ModulePathIT {
     private static final String MAIN = """
@@ -25,12 +26,30 @@ class ModulePathIT {
             import coordination.core.study.StudyReader;
             import coordination.core.study.StudyReport;
             import coordination.core.study.ReportWriter;
+            import coordination.core.study.Study;
+            import java.io.ByteArrayInputStream;
+            import java.io.ByteArrayOutputStream;
+            import java.io.ObjectInputStream;
+            import java.io.ObjectOutputStream;
             import java.nio.file.Path;
 
             public class Main {
                 public static void main(String[] args) throws Exception {
-                    StudyReport r = StudyReport.evaluate(StudyReader.read(Path.of(args[0])));
-                    System.out.println(r.results().size() + " " + ReportWriter.write(r).length());
+                    Study study = StudyReader.read(Path.of(args[0]));
+                    StudyReport r = StudyReport.evaluate(study);
+                    // the values cross a serialization round trip on the module path too
+                    ByteArrayOutputStream bytes = new ByteArrayOutputStream();
+                    try (ObjectOutputStream out = new ObjectOutputStream(bytes)) {
+                        out.writeObject(study);
+                        out.writeObject(r);
+                    }
+                    try (ObjectInputStream in = new ObjectInputStream(new ByteArrayInputStream(bytes.toByteArray()))) {
+                        Study studyBack = (Study) in.readObject();
+                        StudyReport back = (StudyReport) in.readObject();
+                        boolean same = ReportWriter.write(back).equals(ReportWriter.write(r))
+                                && ReportWriter.write(StudyReport.evaluate(studyBack)).equals(ReportWriter.write(r));
+                        System.out.println(r.results().size() + " " + ReportWriter.write(r).length() + " " + same);
+                    }
                 }
             }
             """;
@@ -55,6 +74,7 @@ class ModulePathIT {
         String printed = new String(p.getInputStream().readAllBytes(), StandardCharsets.UTF_8);
         assertThat(printed, p.exitValue(), is(0));
         assertThat(printed, printed.startsWith("4 "), is(true));
+        assertThat(printed, printed.strip().endsWith(" true"), is(true));
     }
 
     private static Process run(List<String> command) throws Exception {

@@ -2,6 +2,7 @@ package coordination.core.cable;
 
 import coordination.core.CoordinationException;
 import coordination.core.internal.Checks;
+import java.io.Serializable;
 import java.util.Optional;
 
 /**
@@ -32,7 +33,7 @@ import java.util.Optional;
  * @param method how the limit is computed
  */
 public record CableThermalLimit(String id, ConductorMaterial material, Insulation insulation, double sizeMm2,
-        int parallel, double initialCelsius, double finalCelsius, ThermalMethod method) {
+        int parallel, double initialCelsius, double finalCelsius, ThermalMethod method) implements Serializable {
 
     /** Shortest fault duration for which the adiabatic limit is used, 0.1 s (common practice). */
     public static final double ADIABATIC_MIN_SECONDS = 0.1;

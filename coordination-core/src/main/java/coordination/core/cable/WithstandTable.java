@@ -1,6 +1,7 @@
 package coordination.core.cable;
 
 import coordination.core.internal.Checks;
+import java.io.Serializable;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.OptionalDouble;
@@ -12,7 +13,7 @@ import java.util.OptionalDouble;
  * @param rows one row per conductor size, in the order given
  * @param timesSeconds fault durations in seconds, each above 0
  */
-public record WithstandTable(List<Row> rows, double[] timesSeconds) {
+public record WithstandTable(List<Row> rows, double[] timesSeconds) implements Serializable {
 
     /**
      * One conductor size.
@@ -20,7 +21,7 @@ public record WithstandTable(List<Row> rows, double[] timesSeconds) {
      * @param label the size as the user wrote it, e.g. {@code 70 mm²} or {@code 4/0 AWG}
      * @param cable the conductor's thermal limit
      */
-    public record Row(String label, CableThermalLimit cable) {
+    public record Row(String label, CableThermalLimit cable) implements Serializable {
         /**
          * The withstand current for each duration of the table.
          *

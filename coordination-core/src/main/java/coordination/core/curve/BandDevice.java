@@ -1,6 +1,8 @@
 package coordination.core.curve;
 
 import coordination.core.internal.Checks;
+import coordination.core.internal.RecordForm;
+import java.io.Serial;
 import java.util.Optional;
 
 /**
@@ -20,6 +22,11 @@ import java.util.Optional;
 public record BandDevice(String id, DeviceKind kind, TimeCurrentCurve minimumCurve, TimeCurrentCurve maximumCurve,
         TimeCurrentCurve slowestOperatingCurve, Optional<LetThroughEnergy> letThrough, double letThroughFromAmps,
         Optional<LetThroughEnergy> preArcing, ProtectiveDevice source) implements ProtectiveDevice {
+    /** Optionals cannot be serialized: the record goes as its components. */
+    @Serial
+    private Object writeReplace() {
+        return RecordForm.of(this);
+    }
 
     /**
      * Validates that nothing is missing.

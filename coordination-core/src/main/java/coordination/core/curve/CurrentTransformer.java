@@ -1,6 +1,7 @@
 package coordination.core.curve;
 
 import coordination.core.internal.Checks;
+import java.io.Serializable;
 
 /**
  * A protection current transformer by its rated primary and secondary currents.
@@ -8,7 +9,7 @@ import coordination.core.internal.Checks;
  * @param primaryAmps rated primary current in amperes, above 0
  * @param secondaryAmps rated secondary current in amperes, above 0 (commonly 1 A or 5 A)
  */
-public record CurrentTransformer(double primaryAmps, double secondaryAmps) {
+public record CurrentTransformer(double primaryAmps, double secondaryAmps) implements Serializable {
 
     /**
      * Validates the ratings.

@@ -1,6 +1,7 @@
 package coordination.core.curve;
 
 import coordination.core.internal.Checks;
+import java.io.Serial;
 import java.util.List;
 
 /**
@@ -8,6 +9,9 @@ import java.util.List;
  * over the stages. All stages must be defined at every current (equation-based stages are).
  */
 public final class FastestOfCurve implements TimeCurrentCurve {
+    @Serial
+    private static final long serialVersionUID = 1L;
+
     private final TimeCurrentCurve[] stages;
     private final String label;
 

@@ -1,6 +1,10 @@
 package coordination.core.curve;
 
 import coordination.core.internal.Checks;
+import java.io.InvalidObjectException;
+import java.io.ObjectInputStream;
+import java.io.Serial;
+import java.io.Serializable;
 import java.util.Optional;
 import java.util.OptionalDouble;
 
@@ -13,6 +17,9 @@ import java.util.OptionalDouble;
  * series matter for the rating-ratio rule of selectivity.
  */
 public final class Fuse implements ProtectiveDevice {
+    @Serial
+    private static final long serialVersionUID = 1L;
+
     private final String id;
     private final double ratingAmps;
     private final TabulatedCurve melting;
@@ -125,5 +132,27 @@ public final class Fuse implements ProtectiveDevice {
     @Override
     public String toString() {
         return "fuse '" + id + "'";
+    }
+
+    /** The inputs go, without optionals; the constructor checks them again on reading. */
+    private record SerialForm(String id, double ratingAmps, TabulatedCurve melting, TabulatedCurve clearing,
+            LetThroughEnergy letThrough, LetThroughEnergy preArcing, String category, String series)
+            implements Serializable {
+        @Serial
+        private Object readResolve() {
+            return new Fuse(id, ratingAmps, melting, clearing, Optional.ofNullable(letThrough),
+                    Optional.ofNullable(preArcing), Optional.ofNullable(category), Optional.ofNullable(series));
+        }
+    }
+
+    @Serial
+    private Object writeReplace() {
+        return new SerialForm(id, ratingAmps, melting, clearing, letThrough.orElse(null), preArcing.orElse(null),
+                category.orElse(null), series.orElse(null));
+    }
+
+    @Serial
+    private void readObject(ObjectInputStream in) throws InvalidObjectException {
+        throw new InvalidObjectException("a fuse is read through its serial form");
     }
 }

@@ -1,6 +1,8 @@
 package coordination.core.curve;
 
 import coordination.core.internal.Checks;
+import java.io.Serial;
+import java.io.Serializable;
 import java.util.Arrays;
 
 /**
@@ -11,7 +13,10 @@ import java.util.Arrays;
  * Below the first point the first value holds; above the last point it has no value, since the
  * energy may keep rising.
  */
-public final class LetThroughEnergy {
+public final class LetThroughEnergy implements Serializable {
+    @Serial
+    private static final long serialVersionUID = 1L;
+
     private final double[] amps;
     private final double[] a2s;
 

@@ -1,6 +1,8 @@
 package coordination.core.curve;
 
 import coordination.core.internal.Checks;
+import coordination.core.internal.RecordForm;
+import java.io.Serial;
 import java.util.Optional;
 
 /**
@@ -32,6 +34,11 @@ import java.util.Optional;
  */
 public record MiniatureBreaker(String id, McbType type, double ratedAmps, double fastestSeconds,
         Optional<LetThroughEnergy> letThrough) implements ProtectiveDevice {
+    /** Optionals cannot be serialized: the record goes as its components. */
+    @Serial
+    private Object writeReplace() {
+        return RecordForm.of(this);
+    }
 
     /** Fastest instantaneous clearing time assumed when none is stated: 5 ms, a quarter cycle at 50 Hz. */
     public static final double DEFAULT_FASTEST_SECONDS = 0.005;

@@ -1,5 +1,6 @@
 package coordination.core.curve;
 
+import java.io.Serializable;
 import java.util.Optional;
 
 /**
@@ -10,7 +11,7 @@ import java.util.Optional;
  *
  * <p>Implementations are immutable and safe to share between threads.
  */
-public interface ProtectiveDevice {
+public interface ProtectiveDevice extends Serializable {
 
     /** @return the device's identifier, unique in a study */
     String id();

@@ -1,6 +1,10 @@
 package coordination.core.curve;
 
 import coordination.core.internal.Checks;
+import java.io.InvalidObjectException;
+import java.io.ObjectInputStream;
+import java.io.Serial;
+import java.io.Serializable;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Optional;
@@ -18,6 +22,9 @@ import java.util.Optional;
  * interrupting time to the slow edge to give the clearing time.
  */
 public final class Relay implements ProtectiveDevice {
+    @Serial
+    private static final long serialVersionUID = 1L;
+
     private final String id;
     private final List<TimeCurrentCurve> stages;
     private final Optional<CurrentTransformer> ct;
@@ -80,6 +87,25 @@ public final class Relay implements ProtectiveDevice {
         this.fastOperating = new FastestOfCurve("relay '" + id + "' fast edge", edges(Edge.FAST));
         this.slowOperating = new FastestOfCurve("relay '" + id + "'", edges(Edge.SLOW));
         this.clearing = slowOperating.delayedBy(breakerSeconds);
+    }
+
+    /** The settings alone go: the edges are built again by the constructor, which checks the settings. */
+    private record SerialForm(String id, List<TimeCurrentCurve> stages, CurrentTransformer ct, double breakerSeconds,
+            RelayTolerance tolerance) implements Serializable {
+        @Serial
+        private Object readResolve() {
+            return new Relay(id, stages, Optional.ofNullable(ct), breakerSeconds, tolerance);
+        }
+    }
+
+    @Serial
+    private Object writeReplace() {
+        return new SerialForm(id, stages, ct.orElse(null), breakerSeconds, tolerance);
+    }
+
+    @Serial
+    private void readObject(ObjectInputStream in) throws InvalidObjectException {
+        throw new InvalidObjectException("a relay is read through its serial form");
     }
 
     private List<TimeCurrentCurve> edges(Edge edge) {

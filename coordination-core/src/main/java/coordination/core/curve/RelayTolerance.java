@@ -1,6 +1,7 @@
 package coordination.core.curve;
 
 import coordination.core.internal.Checks;
+import java.io.Serializable;
 
 /**
  * The accuracy of a relay as IEC 60255-151:2009 states it (clauses 6 and 7, from memory): the
@@ -12,7 +13,8 @@ import coordination.core.internal.Checks;
  * @param timeMinSeconds the smallest operate-time error in seconds, 0 or more
  * @param pickupFraction the start-value error as a fraction of the setting, from 0 to below 1
  */
-public record RelayTolerance(double timeFraction, double timeMinSeconds, double pickupFraction) {
+public record RelayTolerance(double timeFraction, double timeMinSeconds, double pickupFraction)
+        implements Serializable {
 
     /** No stated tolerance: the nominal curve on both edges. */
     public static final RelayTolerance NONE = new RelayTolerance(0, 0, 0);

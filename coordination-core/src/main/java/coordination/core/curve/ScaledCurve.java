@@ -1,9 +1,13 @@
 package coordination.core.curve;
 
 import coordination.core.internal.Checks;
+import java.io.Serial;
 
 /** A curve with its current axis scaled and a constant time added where it operates. */
 final class ScaledCurve implements TimeCurrentCurve {
+    @Serial
+    private static final long serialVersionUID = 1L;
+
     private final TimeCurrentCurve base;
     private final double factor;
     private final double addedSeconds;

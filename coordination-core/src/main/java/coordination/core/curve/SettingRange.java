@@ -1,6 +1,7 @@
 package coordination.core.curve;
 
 import coordination.core.internal.Checks;
+import java.io.Serializable;
 
 /**
  * The values a relay setting can take: from its smallest to its largest, in steps.
@@ -9,7 +10,7 @@ import coordination.core.internal.Checks;
  * @param max largest setting, at or above {@code min}
  * @param step the setting's resolution, a finite number above 0: settings are whole multiples of it
  */
-public record SettingRange(double min, double max, double step) {
+public record SettingRange(double min, double max, double step) implements Serializable {
 
     /**
      * Validates the range.

@@ -1,6 +1,7 @@
 package coordination.core.curve;
 
 import coordination.core.internal.Checks;
+import java.io.Serial;
 import java.util.Arrays;
 
 /**
@@ -10,6 +11,9 @@ import java.util.Arrays;
  * The curve has no value outside the first and last current; it says so rather than extrapolate.
  */
 public final class TabulatedCurve implements TimeCurrentCurve {
+    @Serial
+    private static final long serialVersionUID = 1L;
+
     private final String label;
     private final double[] amps;
     private final double[] seconds;

@@ -1,5 +1,7 @@
 package coordination.core.curve;
 
+import java.io.Serializable;
+
 /**
  * An operating-time characteristic: the time in seconds a device takes to operate (or clear) for
  * a steady current in amperes. Time never rises as current rises.
@@ -11,7 +13,7 @@ package coordination.core.curve;
  *
  * <p>Implementations are immutable and safe to share between threads.
  */
-public interface TimeCurrentCurve {
+public interface TimeCurrentCurve extends Serializable {
 
     /**
      * Operating time at a current.

@@ -1,6 +1,7 @@
 package coordination.core.curve;
 
 import coordination.core.internal.Checks;
+import java.io.Serial;
 
 /**
  * One edge of an inverse-time stage with a relay's time tolerance: the nominal time moved by the
@@ -9,6 +10,9 @@ import coordination.core.internal.Checks;
  * has kinks, which it lists as breakpoints.
  */
 final class TolerancedInverse implements Invertible {
+    @Serial
+    private static final long serialVersionUID = 1L;
+
     private final InverseTimeStage base;
     private final RelayTolerance tolerance;
     private final Edge edge;

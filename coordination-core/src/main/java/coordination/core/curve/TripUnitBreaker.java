@@ -1,6 +1,7 @@
 package coordination.core.curve;
 
 import coordination.core.internal.Checks;
+import java.io.Serializable;
 
 /**
  * A low-voltage circuit breaker with an electronic trip unit: long-time (Ir, tr), optional
@@ -49,7 +50,7 @@ public record TripUnitBreaker(String id, Settings settings) implements Protectiv
      */
     public record Settings(double irAmps, double trSeconds, double isdAmps, double tsdSeconds, boolean shortTimeI2t,
             double iiAmps, double instantaneousMinSeconds, double instantaneousMaxSeconds, double longTimeLowMultiple,
-            double longTimeHighMultiple, double pickupTolerance, double timeTolerance) {
+            double longTimeHighMultiple, double pickupTolerance, double timeTolerance) implements Serializable {
 
         /**
          * Validates the settings.

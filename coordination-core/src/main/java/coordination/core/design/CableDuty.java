@@ -3,10 +3,13 @@ package coordination.core.design;
 import coordination.core.cable.CableThermalLimit;
 import coordination.core.curve.ProtectiveDevice;
 import coordination.core.internal.Checks;
+import coordination.core.internal.RecordForm;
 import coordination.core.margin.CableCheck;
 import coordination.core.margin.CableCheckResult;
 import coordination.core.margin.DcOffset;
 import coordination.core.margin.MarginRequirement;
+import java.io.Serial;
+import java.io.Serializable;
 import java.util.Optional;
 
 /**
@@ -20,7 +23,12 @@ import java.util.Optional;
  * @param dcOffset the DC-offset heating, unless left out
  */
 public record CableDuty(CableThermalLimit cable, double fromAmps, double toAmps, MarginRequirement requirement,
-        Optional<DcOffset> dcOffset) {
+        Optional<DcOffset> dcOffset) implements Serializable {
+    /** Optionals cannot be serialized: the record goes as its components. */
+    @Serial
+    private Object writeReplace() {
+        return RecordForm.of(this);
+    }
 
     /**
      * Validates the duty.

@@ -10,6 +10,7 @@ import coordination.core.internal.Checks;
 import coordination.core.margin.CableCheck;
 import coordination.core.margin.CableCheckResult;
 import coordination.core.margin.MarginRequirement;
+import java.io.Serializable;
 
 /**
  * The smallest conductor cross-section a device protects over a fault range with a required
@@ -35,7 +36,7 @@ public final class MinimumConductor {
      * @param reason why no size passes, or null
      */
     public record Result(double sizeMm2, double iecSizeMm2, String awgOrKcmil, CableCheckResult check,
-            String reason) {
+            String reason) implements Serializable {
         /** @return whether a size was found */
         public boolean found() {
             return !Double.isNaN(sizeMm2);

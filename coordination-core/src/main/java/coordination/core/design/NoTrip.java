@@ -1,6 +1,7 @@
 package coordination.core.design;
 
 import coordination.core.internal.Checks;
+import java.io.Serializable;
 
 /**
  * A current a relay must carry without operating for a time: a motor start, a transformer's
@@ -9,7 +10,7 @@ import coordination.core.internal.Checks;
  * @param currentAmps current in primary amperes at the relay's voltage, above 0
  * @param seconds how long, in seconds, above 0
  */
-public record NoTrip(double currentAmps, double seconds) {
+public record NoTrip(double currentAmps, double seconds) implements Serializable {
     /**
      * Validates the point.
      *

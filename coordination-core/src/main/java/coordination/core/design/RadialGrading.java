@@ -7,10 +7,13 @@ import coordination.core.curve.Relay;
 import coordination.core.curve.SettingRange;
 import coordination.core.curve.TimeCurrentCurve;
 import coordination.core.internal.Checks;
+import coordination.core.internal.RecordForm;
 import coordination.core.margin.CableCheckResult;
 import coordination.core.margin.GradingCheck;
 import coordination.core.margin.GradingCheckResult;
 import coordination.core.margin.GradingRequirement;
+import java.io.Serial;
+import java.io.Serializable;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Optional;
@@ -48,7 +51,13 @@ public final class RadialGrading {
      */
     public record Link(Relay relay, double referFactor, Optional<CableDuty> cable,
             GradingRequirement.Interval interval, double gradingFromAmps, double gradingToAmps, List<NoTrip> noTrip,
-            List<Fixed> fixedBelow, List<Fixed> fixedAbove) {
+            List<Fixed> fixedBelow, List<Fixed> fixedAbove) implements Serializable {
+        /** Optionals cannot be serialized: the record goes as its components. */
+        @Serial
+        private Object writeReplace() {
+            return RecordForm.of(this);
+        }
+
         /**
          * Validates the link.
          *
@@ -102,7 +111,8 @@ public final class RadialGrading {
      * @param toAmps highest current
      * @param requirement the check's requirement
      */
-    public record Fixed(ProtectiveDevice device, double fromAmps, double toAmps, GradingRequirement requirement) {
+    public record Fixed(ProtectiveDevice device, double fromAmps, double toAmps, GradingRequirement requirement)
+            implements Serializable {
         /**
          * Validates the device.
          *
@@ -158,7 +168,14 @@ public final class RadialGrading {
      */
     public record Setting(String id, MultiplierKind kind, SettingRange range, double currentMultiplier, OptionalDouble exact,
             OptionalDouble proposed, Binding binding, Optional<String> bindingDevice,
-            List<GradingCheckResult> gradings, Optional<CableCheckResult> cable, Optional<String> problem) {
+            List<GradingCheckResult> gradings, Optional<CableCheckResult> cable, Optional<String> problem)
+            implements Serializable {
+        /** Optionals cannot be serialized: the record goes as its components. */
+        @Serial
+        private Object writeReplace() {
+            return RecordForm.of(this);
+        }
+
         /**
          * Copies the list in.
          *

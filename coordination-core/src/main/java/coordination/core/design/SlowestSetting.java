@@ -7,6 +7,7 @@ import coordination.core.curve.Relay;
 import coordination.core.curve.TimeCurrentCurve;
 import coordination.core.margin.CableCheckResult;
 import coordination.core.margin.MarginRequirement;
+import java.io.Serializable;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.function.DoubleFunction;
@@ -29,7 +30,8 @@ public final class SlowestSetting {
      * @param check the check at the largest setting (or at the current one if none passes)
      * @param reason why no setting passes, or null
      */
-    public record Result(double current, double largest, CableCheckResult check, String reason) {
+    public record Result(double current, double largest, CableCheckResult check, String reason)
+            implements Serializable {
         /** @return whether a passing setting was found */
         public boolean found() {
             return !Double.isNaN(largest);

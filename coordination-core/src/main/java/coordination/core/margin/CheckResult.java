@@ -1,10 +1,12 @@
 package coordination.core.margin;
 
+import java.io.Serializable;
+
 /**
  * The outcome of one check of a study, whatever its kind. Every kind is a record in this package;
  * a consumer switches over them with pattern matching instead of casting.
  */
-public sealed interface CheckResult permits CableCheckResult, GradingCheckResult {
+public sealed interface CheckResult extends Serializable permits CableCheckResult, GradingCheckResult {
 
     /** @return whether the check passes */
     boolean pass();

@@ -1,6 +1,7 @@
 package coordination.core.margin;
 
 import coordination.core.internal.Checks;
+import java.io.Serializable;
 
 /**
  * Heating by the decaying DC component of a short-circuit current, as the factor m of
@@ -16,7 +17,7 @@ import coordination.core.internal.Checks;
  * @param kappa peak factor κ of the fault current, above 1 and at most 2
  * @param frequencyHz system frequency in Hz, above 0
  */
-public record DcOffset(double kappa, double frequencyHz) {
+public record DcOffset(double kappa, double frequencyHz) implements Serializable {
 
     /** The peak factor assumed where a study states neither κ nor X/R: 1.8 (common practice). */
     public static final double ASSUMED_KAPPA = 1.8;

@@ -1,6 +1,7 @@
 package coordination.core.margin;
 
 import coordination.core.internal.Checks;
+import java.io.Serializable;
 
 /**
  * What a grading check asks of two devices in series: a coordination time interval (CTI), a
@@ -14,7 +15,7 @@ import coordination.core.internal.Checks;
  * With any fuse or breaker in the pair, the interval is measured to the downstream device's total
  * clearing time. {@link #intervalBetweenClearingTimes(double)} asks the stricter form explicitly.
  */
-public sealed interface GradingRequirement {
+public sealed interface GradingRequirement extends Serializable {
 
     /**
      * A coordination time interval: the upstream minimum curve at least this far above the

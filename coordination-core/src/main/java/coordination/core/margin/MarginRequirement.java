@@ -1,12 +1,13 @@
 package coordination.core.margin;
 
 import coordination.core.internal.Checks;
+import java.io.Serializable;
 
 /**
  * The margin a cable check asks for between the device's clearing time and the cable's damage
  * time: either an absolute time margin or a ratio (a vertical distance on the log-log chart).
  */
-public sealed interface MarginRequirement {
+public sealed interface MarginRequirement extends Serializable {
 
     /**
      * Whether a computed minimum margin meets this requirement.

@@ -1,5 +1,7 @@
 package coordination.core.margin;
 
+import java.io.Serializable;
+
 /**
  * A part of a check's current range and the thermal method used there.
  *
@@ -10,7 +12,7 @@ package coordination.core.margin;
  *     {@link #ADIABATIC_CONSERVATIVE}, {@link #NON_ADIABATIC}, {@link #ICEA}, {@link #NOT_CLEARED},
  *     {@link #UNDEFINED}
  */
-public record ThermalRegion(double fromAmps, double toAmps, String method) {
+public record ThermalRegion(double fromAmps, double toAmps, String method) implements Serializable {
     /** Clearing under 0.1 s: let-through energy I²t compared with k²S². */
     public static final String ENERGY = "energy";
     /** As {@link #ENERGY}, with the DC-offset heating of IEC 60909-0. */

@@ -1,6 +1,7 @@
 package coordination.core.network;
 
 import coordination.core.internal.Checks;
+import java.io.Serializable;
 
 /**
  * A bus: a node of the network at one nominal voltage, with the voltage factors of its faults.
@@ -10,7 +11,7 @@ import coordination.core.internal.Checks;
  * @param cMax voltage factor for maximum currents
  * @param cMin voltage factor for minimum currents
  */
-public record Bus(String id, double voltageKv, double cMax, double cMin) {
+public record Bus(String id, double voltageKv, double cMax, double cMin) implements Serializable {
 
     /**
      * Validates the bus.

@@ -1,6 +1,7 @@
 package coordination.core.network;
 
 import coordination.core.internal.Checks;
+import java.io.Serializable;
 
 /**
  * A cable between two buses, with its impedance per kilometre.
@@ -15,7 +16,7 @@ import coordination.core.internal.Checks;
  * @param parallel conductors in parallel per phase
  */
 public record CableBranch(String id, String from, String to, double lengthM, double rOhmPerKm, double xOhmPerKm,
-        double endTemperatureC, int parallel) {
+        double endTemperatureC, int parallel) implements Serializable {
 
     /** IEC 60909-0:2016, 10.3: R = [1 + α (θe − 20 °C)] R20 with α = 0.004 /K for copper and aluminium. */
     public static final double ALPHA_PER_K = 0.004;

@@ -1,5 +1,7 @@
 package coordination.core.network;
 
+import java.io.Serializable;
+
 /**
  * The short-circuit currents at one point of the network, by IEC 60909-0.
  *
@@ -13,5 +15,5 @@ package coordination.core.network;
  * @param rOverX R/X of the maximum case's impedance at the point
  */
 public record FaultLevel(String at, String bus, double ik3MaxAmps, double ik3MinAmps, double ik2MinAmps,
-        double kappa, double ipAmps, double rOverX) {
+        double kappa, double ipAmps, double rOverX) implements Serializable {
 }

@@ -1,5 +1,6 @@
 package coordination.core.network;
 
+import java.io.Serializable;
 import java.util.ArrayDeque;
 import java.util.ArrayList;
 import java.util.Collections;
@@ -33,7 +34,7 @@ import org.apache.commons.math3.complex.Complex;
  * @param impedances each bus's impedance from the source, at the bus's own voltage
  */
 public record FaultLevels(Network network, List<FaultLevel> levels, Map<String, Network.Branch> parents,
-        Map<String, SourceImpedance> impedances) {
+        Map<String, SourceImpedance> impedances) implements Serializable {
 
     /**
      * The impedance from the source to a bus, at the bus's voltage, in Ω.
@@ -43,7 +44,8 @@ public record FaultLevels(Network network, List<FaultLevel> levels, Map<String, 
      * @param rMinOhm resistance for the minimum currents (conductors at their end temperature)
      * @param xMinOhm reactance for the minimum currents
      */
-    public record SourceImpedance(double rMaxOhm, double xMaxOhm, double rMinOhm, double xMinOhm) {
+    public record SourceImpedance(double rMaxOhm, double xMaxOhm, double rMinOhm, double xMinOhm)
+            implements Serializable {
     }
 
     /**

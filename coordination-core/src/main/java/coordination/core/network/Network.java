@@ -1,6 +1,7 @@
 package coordination.core.network;
 
 import coordination.core.internal.Checks;
+import java.io.Serializable;
 import java.util.ArrayList;
 import java.util.HashMap;
 import java.util.LinkedHashMap;
@@ -19,7 +20,7 @@ import java.util.Optional;
  * @param cables the cable branches
  */
 public record Network(List<Bus> buses, List<Source> sources, List<Transformer> transformers,
-        List<CableBranch> cables) {
+        List<CableBranch> cables) implements Serializable {
 
     /**
      * What is wrong with a network, located at one of its elements.
@@ -29,11 +30,11 @@ public record Network(List<Bus> buses, List<Source> sources, List<Transformer> t
      * @param key the key at fault
      * @param message what is wrong
      */
-    public record Problem(String kind, String id, String key, String message) {
+    public record Problem(String kind, String id, String key, String message) implements Serializable {
     }
 
     /** A branch of the tree: a transformer or a cable. */
-    public sealed interface Branch permits TransformerBranch, Cable {
+    public sealed interface Branch extends Serializable permits TransformerBranch, Cable {
         /** @return the branch's id */
         String id();
 

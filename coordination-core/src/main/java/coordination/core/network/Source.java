@@ -1,6 +1,7 @@
 package coordination.core.network;
 
 import coordination.core.internal.Checks;
+import java.io.Serializable;
 
 /**
  * A network feeder: the upstream system seen at a bus through its short-circuit power.
@@ -11,7 +12,7 @@ import coordination.core.internal.Checks;
  * @param skMinMva the same for minimum currents, MVA
  * @param xOverR the ratio X/R of its impedance
  */
-public record Source(String id, String bus, double skMaxMva, double skMinMva, double xOverR) {
+public record Source(String id, String bus, double skMaxMva, double skMinMva, double xOverR) implements Serializable {
 
     /**
      * Validates the source.

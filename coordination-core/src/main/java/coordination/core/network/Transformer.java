@@ -1,6 +1,7 @@
 package coordination.core.network;
 
 import coordination.core.internal.Checks;
+import java.io.Serializable;
 
 /**
  * A two-winding transformer between an HV and an LV bus, rated at its buses' voltages.
@@ -14,7 +15,7 @@ import coordination.core.internal.Checks;
  * @param vectorGroup the vector group, e.g. Dyn11
  */
 public record Transformer(String id, String hvBus, String lvBus, double srKva, double ukPercent, double pkKw,
-        String vectorGroup) {
+        String vectorGroup) implements Serializable {
 
     /**
      * Validates the transformer.

@@ -1,5 +1,7 @@
 package coordination.core.study;
 
+import java.io.Serializable;
+
 /**
  * Something a reader of a result must know: an assumption the result rests on (a defaulted
  * temperature, an assumed κ, a constant let-through) or a warning (a range that hides part of the
@@ -8,7 +10,7 @@ package coordination.core.study;
  * @param code a stable key for tools, e.g. {@code dc-offset-kappa-assumed}
  * @param message one sentence for people
  */
-public record Note(String code, String message) {
+public record Note(String code, String message) implements Serializable {
     /**
      * Validates the note.
      *

@@ -19,6 +19,7 @@ import coordination.core.margin.GradingCheckResult;
 import coordination.core.margin.GradingRequirement;
 import coordination.core.margin.MarginRequirement;
 import coordination.core.margin.ThermalRegion;
+import java.io.Serializable;
 import java.util.List;
 
 /**
@@ -91,7 +92,7 @@ public final class ReportWriter {
      * @param file the file as it was named
      * @param errors its error lines, each {@code FILE:LINE:COLUMN: key: message}
      */
-    public record NotRead(String file, List<String> errors) {
+    public record NotRead(String file, List<String> errors) implements Serializable {
         /**
          * Copies the list in.
          *

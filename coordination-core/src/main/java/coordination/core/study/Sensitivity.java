@@ -1,6 +1,7 @@
 package coordination.core.study;
 
 import coordination.core.internal.Checks;
+import java.io.Serializable;
 import java.util.ArrayList;
 import java.util.List;
 
@@ -15,7 +16,8 @@ import java.util.List;
  * @param nominal the report of the study as given
  * @param widened the report with every range widened
  */
-public record Sensitivity(double minFactor, double maxFactor, StudyReport nominal, StudyReport widened) {
+public record Sensitivity(double minFactor, double maxFactor, StudyReport nominal, StudyReport widened)
+        implements Serializable {
 
     /** Factor on the lowest currents when none is given: 10 % below (common practice). */
     public static final double DEFAULT_MIN_FACTOR = 0.9;

@@ -4,9 +4,12 @@ import coordination.core.cable.CableThermalLimit;
 import coordination.core.curve.ProtectiveDevice;
 import coordination.core.design.NoTrip;
 import coordination.core.internal.Checks;
+import coordination.core.internal.RecordForm;
 import coordination.core.margin.DcOffset;
 import coordination.core.margin.GradingRequirement;
 import coordination.core.margin.MarginRequirement;
+import java.io.Serial;
+import java.io.Serializable;
 import java.util.List;
 import java.util.Optional;
 import java.util.OptionalDouble;
@@ -30,7 +33,12 @@ import java.util.OptionalDouble;
  */
 public record Study(String name, String title, double voltageKv, double frequencyHz, String revision, String date,
         PageSize page, List<StudyCable> cables, List<StudyDevice> devices, List<StudyCheck> checks,
-        SignOff signOff, Optional<StudyNetwork> network) {
+        SignOff signOff, Optional<StudyNetwork> network) implements Serializable {
+    /** Optionals cannot be serialized: the record goes as its components. */
+    @Serial
+    private Object writeReplace() {
+        return RecordForm.of(this);
+    }
 
     /**
      * The sheet's sign-off block, each field empty where the study leaves it out (the sheet then
@@ -41,7 +49,7 @@ public record Study(String name, String title, double voltageKv, double frequenc
      * @param checked who checked it
      * @param approved who approved it
      */
-    public record SignOff(String drawing, String prepared, String checked, String approved) {
+    public record SignOff(String drawing, String prepared, String checked, String approved) implements Serializable {
         /** A block with every field empty. */
         public static final SignOff NONE = new SignOff("", "", "", "");
 
@@ -75,7 +83,7 @@ public record Study(String name, String title, double voltageKv, double frequenc
      * @param branch the cable or transformer it sits at
      * @param end which end
      */
-    public record Placement(String branch, End end) {
+    public record Placement(String branch, End end) implements Serializable {
     }
 
     /**
@@ -85,7 +93,7 @@ public record Study(String name, String title, double voltageKv, double frequenc
      * @param downstream the downstream device
      * @param reason why
      */
-    public record Accepted(String upstream, String downstream, String reason) {
+    public record Accepted(String upstream, String downstream, String reason) implements Serializable {
     }
 
     /**
@@ -98,7 +106,8 @@ public record Study(String name, String title, double voltageKv, double frequenc
      * @param warnings what the derivation could not do (a cable without a protecting device, ...)
      */
     public record StudyNetwork(coordination.core.network.Network network, coordination.core.network.FaultLevels levels,
-            java.util.Map<String, Placement> placements, List<Accepted> accepted, List<Note> warnings) {
+            java.util.Map<String, Placement> placements, List<Accepted> accepted, List<Note> warnings)
+            implements Serializable {
         /**
          * Copies the collections in.
          *
@@ -210,7 +219,7 @@ public record Study(String name, String title, double voltageKv, double frequenc
      * @param fromAmps lowest current in amperes, above 0
      * @param toAmps highest current in amperes, at or above {@code fromAmps}
      */
-    public record CurrentRange(double fromAmps, double toAmps) {
+    public record CurrentRange(double fromAmps, double toAmps) implements Serializable {
         /**
          * Validates the range.
          *
@@ -254,7 +263,13 @@ public record Study(String name, String title, double voltageKv, double frequenc
      * @param finalSource where the final temperature came from
      */
     public record StudyCable(CableThermalLimit limit, String sizeText, Optional<CurrentRange> fault,
-            TemperatureSource initialSource, TemperatureSource finalSource) {
+            TemperatureSource initialSource, TemperatureSource finalSource) implements Serializable {
+        /** Optionals cannot be serialized: the record goes as its components. */
+        @Serial
+        private Object writeReplace() {
+            return RecordForm.of(this);
+        }
+
         /** @return the cable's id */
         public String id() {
             return limit.id();
@@ -272,7 +287,7 @@ public record Study(String name, String title, double voltageKv, double frequenc
      * @param limits what a design proposal for its settings must respect
      */
     public record StudyDevice(ProtectiveDevice device, double voltageKv, double referralFactor,
-            ProtectiveDevice referred, List<Note> assumptions, DesignLimits limits) {
+            ProtectiveDevice referred, List<Note> assumptions, DesignLimits limits) implements Serializable {
         /**
          * Copies the list in.
          *
@@ -294,7 +309,7 @@ public record Study(String name, String title, double voltageKv, double frequenc
     }
 
     /** A check to run. */
-    public sealed interface StudyCheck permits CableCheckSpec, GradingCheckSpec {
+    public sealed interface StudyCheck extends Serializable permits CableCheckSpec, GradingCheckSpec {
     }
 
     /**
@@ -306,7 +321,13 @@ public record Study(String name, String title, double voltageKv, double frequenc
      * @param pickupStepAmps resolution of the first inverse-time stage's pickup, in its setting's amperes
      */
     public record DesignLimits(OptionalDouble loadAmps, List<NoTrip> noTrip, double sensitivityFactor,
-            double pickupStepAmps) {
+            double pickupStepAmps) implements Serializable {
+        /** Optionals cannot be serialized: the record goes as its components. */
+        @Serial
+        private Object writeReplace() {
+            return RecordForm.of(this);
+        }
+
         /** Pickup over full-load current at least this: 1.25 (common practice). */
         public static final double LOAD_FACTOR = 1.25;
         /** Lowest fault current over pickup at least this: 1.5 (common practice). */
@@ -364,6 +385,12 @@ public record Study(String name, String title, double voltageKv, double frequenc
     public record CableCheckSpec(String cable, String device, MarginRequirement requirement, CurrentRange range,
             Optional<DcOffset> dcOffset, DcSource dcSource, boolean derived, String faultCase,
             double conductorShare) implements StudyCheck {
+        /** Optionals cannot be serialized: the record goes as its components. */
+        @Serial
+        private Object writeReplace() {
+            return RecordForm.of(this);
+        }
+
         /**
          * A check of the whole cable.
          *

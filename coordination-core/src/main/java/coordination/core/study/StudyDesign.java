@@ -9,7 +9,10 @@ import coordination.core.design.MinimumConductor;
 import coordination.core.design.RadialGrading;
 import coordination.core.design.SlowestSetting;
 import coordination.core.internal.Checks;
+import coordination.core.internal.RecordForm;
 import coordination.core.margin.GradingRequirement;
+import java.io.Serial;
+import java.io.Serializable;
 import java.util.ArrayList;
 import java.util.HashMap;
 import java.util.LinkedHashMap;
@@ -32,7 +35,7 @@ import java.util.OptionalDouble;
  * @param cableAids one entry per cable check, in study order
  * @param chains one entry per chain of relays linked by interval grading checks
  */
-public record StudyDesign(Study study, List<CableAid> cableAids, List<GradingChain> chains) {
+public record StudyDesign(Study study, List<CableAid> cableAids, List<GradingChain> chains) implements Serializable {
 
     /**
      * Copies the lists in.
@@ -55,7 +58,12 @@ public record StudyDesign(Study study, List<CableAid> cableAids, List<GradingCha
      * @param stage proposals for the relay's first inverse-time stage, if the device is such a relay
      */
     public record CableAid(Study.CableCheckSpec check, Study.StudyCable cable, MinimumConductor.Result conductor,
-            Optional<StageAid> stage) {
+            Optional<StageAid> stage) implements Serializable {
+        /** Optionals cannot be serialized: the record goes as its components. */
+        @Serial
+        private Object writeReplace() {
+            return RecordForm.of(this);
+        }
     }
 
     /** What decides the largest proposal of a setting. */
@@ -92,7 +100,13 @@ public record StudyDesign(Study study, List<CableAid> cableAids, List<GradingCha
      * @param problem what cannot be met, or empty
      */
     public record MultiplierAid(MultiplierKind kind, SettingRange range, double now, OptionalDouble largest,
-            OptionalDouble smallest, OptionalDouble proposed, UpperBound binding, Optional<String> problem) {
+            OptionalDouble smallest, OptionalDouble proposed, UpperBound binding, Optional<String> problem)
+            implements Serializable {
+        /** Optionals cannot be serialized: the record goes as its components. */
+        @Serial
+        private Object writeReplace() {
+            return RecordForm.of(this);
+        }
     }
 
     /**
@@ -109,7 +123,14 @@ public record StudyDesign(Study study, List<CableAid> cableAids, List<GradingCha
      * @param problem what cannot be met, or empty
      */
     public record PickupAid(double now, double ctRatio, double step, OptionalDouble largest,
-            OptionalDouble lowestForLoad, OptionalDouble proposed, UpperBound binding, Optional<String> problem) {
+            OptionalDouble lowestForLoad, OptionalDouble proposed, UpperBound binding, Optional<String> problem)
+            implements Serializable {
+        /** Optionals cannot be serialized: the record goes as its components. */
+        @Serial
+        private Object writeReplace() {
+            return RecordForm.of(this);
+        }
+
         /** @return whether the pickup is set in CT-secondary amperes */
         public boolean secondary() {
             return ctRatio != 1.0;
@@ -123,7 +144,7 @@ public record StudyDesign(Study study, List<CableAid> cableAids, List<GradingCha
      * @param multiplier its slowest multiplier
      * @param pickup its largest pickup
      */
-    public record StageAid(InverseTimeStage stage, MultiplierAid multiplier, PickupAid pickup) {
+    public record StageAid(InverseTimeStage stage, MultiplierAid multiplier, PickupAid pickup) implements Serializable {
     }
 
     /**
@@ -133,7 +154,8 @@ public record StudyDesign(Study study, List<CableAid> cableAids, List<GradingCha
      *     that of the check linking it upward)
      * @param relays one setting per relay, from the load end up
      */
-    public record GradingChain(List<GradingRequirement.Interval> intervals, List<RadialGrading.Setting> relays) {
+    public record GradingChain(List<GradingRequirement.Interval> intervals, List<RadialGrading.Setting> relays)
+            implements Serializable {
         /**
          * Copies the list in.
          *

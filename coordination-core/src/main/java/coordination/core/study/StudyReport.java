@@ -4,6 +4,7 @@ import coordination.core.Quantities;
 import coordination.core.margin.CableCheck;
 import coordination.core.margin.CheckResult;
 import coordination.core.margin.GradingCheck;
+import java.io.Serializable;
 import java.util.ArrayList;
 import java.util.List;
 
@@ -16,7 +17,8 @@ import java.util.List;
  * @param notes the assumptions and warnings of each check, in the same order
  * @param warnings warnings about the study as a whole
  */
-public record StudyReport(Study study, List<CheckResult> results, List<CheckNotes> notes, List<Note> warnings) {
+public record StudyReport(Study study, List<CheckResult> results, List<CheckNotes> notes, List<Note> warnings)
+        implements Serializable {
 
     /** Version of the report format. */
     public static final int FORMAT = 1;
@@ -27,7 +29,7 @@ public record StudyReport(Study study, List<CheckResult> results, List<CheckNote
      * @param assumptions defaults and assumptions its result depends on
      * @param warnings what its context says it leaves out
      */
-    public record CheckNotes(List<Note> assumptions, List<Note> warnings) {
+    public record CheckNotes(List<Note> assumptions, List<Note> warnings) implements Serializable {
         /**
          * Copies the lists in.
          *
