@@ -191,23 +191,13 @@ public final class StudyReader {
      */
     public static Study read(Path path) {
         String shown = path.toString();
-        String name = path.getFileName() == null ? "study" : path.getFileName().toString();
-        Optional<TextRules.Refusal> badName = TextRules.check(name, false);
-        if (badName.isPresent()) {
-            throw single(shown, "the file name " + badName.get().message() + "; rename the file");
-        }
-        int dot = name.lastIndexOf('.');
-        String base = dot > 0 ? name.substring(0, dot) : name;
+        String base = baseName(path);
         try {
             if (!Files.isRegularFile(path)) {
                 throw single(shown, Files.exists(path) ? "not a regular file (a pipe, a device or a socket)"
                         : "no such file");
             }
-            long size = Files.size(path);
-            if (size > MAX_FILE_BYTES) {
-                throw single(shown, "the file is " + size + " bytes - study files are limited to " + MAX_FILE_BYTES
-                        + " bytes (1 MiB)");
-            }
+            checkSize(shown, Files.size(path));
             try (InputStream in = Files.newInputStream(path)) {
                 return read(in, shown, base);
             }
@@ -217,6 +207,44 @@ public final class StudyReader {
             throw single(shown, "cannot read the file: no such file");
         } catch (IOException e) {
             throw single(shown, "cannot read the file: " + e.getMessage());
+        }
+    }
+
+    /**
+     * Reads a study file whose bytes were read elsewhere (a batch engine's input), with the same checks and
+     * messages as {@link #read(Path)}.
+     *
+     * @param path the file, for its name and the problems' file
+     * @param content the file's bytes
+     * @return the study
+     * @throws StudyFileException with every problem found, if the file cannot be used
+     */
+    public static Study read(Path path, byte[] content) {
+        String shown = path.toString();
+        String base = baseName(path);
+        checkSize(shown, content.length);
+        try {
+            return read(new java.io.ByteArrayInputStream(content), shown, base);
+        } catch (IOException e) {
+            throw new IllegalStateException("reading bytes in memory failed", e);
+        }
+    }
+
+    /** The study's name from its file's name, which must be printable text. */
+    private static String baseName(Path path) {
+        String name = path.getFileName() == null ? "study" : path.getFileName().toString();
+        Optional<TextRules.Refusal> badName = TextRules.check(name, false);
+        if (badName.isPresent()) {
+            throw single(path.toString(), "the file name " + badName.get().message() + "; rename the file");
+        }
+        int dot = name.lastIndexOf('.');
+        return dot > 0 ? name.substring(0, dot) : name;
+    }
+
+    private static void checkSize(String shown, long size) {
+        if (size > MAX_FILE_BYTES) {
+            throw single(shown, "the file is " + size + " bytes - study files are limited to " + MAX_FILE_BYTES
+                    + " bytes (1 MiB)");
         }
     }
 

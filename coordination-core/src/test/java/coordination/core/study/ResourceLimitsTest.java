@@ -53,6 +53,28 @@ class ResourceLimitsTest {
                 + " bytes (1 MiB)"));
     }
 
+    /** Bytes read elsewhere (a batch engine's input) meet the same checks and messages as the file. */
+    @Test
+    void bytesReadElsewhereAreCheckedAsTheFileIs(@TempDir Path tmp) throws Exception {
+        Path big = tmp.resolve("big.yaml");
+        byte[] tooMany = new byte[(int) StudyReader.MAX_FILE_BYTES + 1];
+        Files.write(big, tooMany);
+        StudyFileException fromFile = assertThrows(StudyFileException.class, () -> StudyReader.read(big));
+        StudyFileException fromBytes = assertThrows(StudyFileException.class, () -> StudyReader.read(big, tooMany));
+        assertThat(fromBytes.getMessage(), is(fromFile.getMessage()));
+
+        Path badName = tmp.resolve("bad\u202ename.yaml");
+        byte[] study = "format: 1\ntitle: t\nvoltage_kv: 0.4\n".getBytes(java.nio.charset.StandardCharsets.UTF_8);
+        Files.write(badName, study);
+        assertThat(assertThrows(StudyFileException.class, () -> StudyReader.read(badName, study)).getMessage(),
+                is(assertThrows(StudyFileException.class, () -> StudyReader.read(badName)).getMessage()));
+
+        Path good = tmp.resolve("feeder.yaml");
+        Files.write(good, study);
+        assertThat(StudyReader.read(good, study).name(), is(StudyReader.read(good).name()));
+        assertThat(StudyReader.read(good, study).name(), is("feeder"));
+    }
+
     @Test
     void documentNestedTenThousandDeepIsRefused() {
         String deep = "title: " + "[".repeat(10_000) + "]".repeat(10_000) + "\n";

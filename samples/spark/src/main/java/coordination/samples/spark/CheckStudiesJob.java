@@ -6,7 +6,6 @@ import coordination.core.study.Study;
 import coordination.core.study.StudyFileException;
 import coordination.core.study.StudyReader;
 import coordination.core.study.StudyReport;
-import java.io.ByteArrayInputStream;
 import java.io.IOException;
 import java.io.UncheckedIOException;
 import java.net.URI;
@@ -30,7 +29,8 @@ import org.apache.spark.sql.SparkSession;
  *
  * <p>Reports are written with {@code java.nio} from the executors, so on a cluster the output folder must be
  * one every executor reaches (a shared mount). A study that cannot be read gets {@code NAME.errors.txt} with
- * the located error lines the command line prints, and the verdict {@code not-read} in the summary.
+ * the located error lines the command line prints, and the verdict {@code not-read} in the summary. Spark's
+ * file listing skips names that start with {@code .} or {@code _}: the command line skips only the first.
  */
 public final class CheckStudiesJob {
     /** The verdict of a study that could not be read. */
@@ -73,6 +73,7 @@ public final class CheckStudiesJob {
         Path file = Path.of(URI.create(uri));
         Path relative = Path.of(root).relativize(file);
         String name = file.getFileName().toString();
+        // the outputs' name, as the command line's; the study itself takes its name from the reader
         int dot = name.lastIndexOf('.');
         String base = dot > 0 ? name.substring(0, dot) : name;
         Path folder = Path.of(reports).resolve(relative).getParent();
@@ -81,7 +82,7 @@ public final class CheckStudiesJob {
         o.setStudy(base);
         Study study;
         try {
-            study = StudyReader.read(new ByteArrayInputStream(content), file.toString(), base);
+            study = StudyReader.read(file, content);
         } catch (StudyFileException e) {
             List<String> lines = new ArrayList<>();
             for (Problem p : e.problems()) {
