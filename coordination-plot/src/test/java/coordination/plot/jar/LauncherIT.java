@@ -11,6 +11,7 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.concurrent.TimeUnit;
 import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
 
 /** bin/coordination, as packaged: the same output and exit code as the jar, with its archive made once. */
 class LauncherIT {
@@ -56,5 +57,24 @@ class LauncherIT {
         assertThat(Files.isRegularFile(ARCHIVE), is(true));
         Run second = run(launcher("check", "--json", STUDY));
         assertThat(second, is(jar));
+        // the training's class list and temporary archive are gone, and no crash report was left behind
+        try (var beside = Files.list(ARCHIVE.getParent()); var here = Files.list(Path.of("."))) {
+            assertThat(beside.map(f -> f.getFileName().toString())
+                    .filter(n -> n.startsWith("coordination.jsa.") || n.startsWith("hs_err")).toList(), is(List.of()));
+            assertThat(here.map(f -> f.getFileName().toString()).filter(n -> n.startsWith("hs_err")).toList(),
+                    is(List.of()));
+        }
+    }
+
+    @Test
+    void aSheetFromTheLauncherIsTheJarsSheet(@TempDir Path tmp) throws Exception {
+        assumeTrue(Files.isExecutable(Path.of("/bin/sh")), "a POSIX shell");
+        Path viaJar = tmp.resolve("jar");
+        Path viaLauncher = tmp.resolve("launcher");
+        assertThat(run(java("sheet", STUDY, "-o", viaJar.toString(), "--quiet")).code(), is(1));
+        assertThat(run(launcher("sheet", STUDY, "-o", viaLauncher.toString(), "--quiet")).code(), is(1));
+        for (String name : List.of("05-blower-feeder-undersized.svg", "05-blower-feeder-undersized.report.json")) {
+            assertThat(name, Files.readAllBytes(viaLauncher.resolve(name)), is(Files.readAllBytes(viaJar.resolve(name))));
+        }
     }
 }
