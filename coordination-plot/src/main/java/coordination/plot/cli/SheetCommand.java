@@ -44,10 +44,10 @@ final class SheetCommand implements Callable<Integer> {
     Path output;
 
     @Option(names = "--format", split = ",", paramLabel = "FORMAT", completionCandidates = Formats.class,
-            description = "${COMPLETION-CANDIDATES}, comma-separated (default: svg,png)")
-    List<String> formats = List.of("svg", "png");
+            description = "${COMPLETION-CANDIDATES}, comma-separated (default: svg)")
+    List<String> formats = List.of("svg");
 
-    @Option(names = "--dpi", paramLabel = "DPI", description = "PNG resolution, 72 to 600 (default: 150)")
+    @Option(names = "--dpi", paramLabel = "DPI", description = "PNG resolution, 72 to 600 (default: 150; 300 for print)")
     int dpi = 150;
 
     @Option(names = "--threads", paramLabel = "N", description = "worker threads (default: all cores)")

@@ -65,10 +65,12 @@ class CliTest {
         Path out = tmp.resolve("out");
         Path good = tmp.resolve("feeder.yaml");
         Files.copy(SAMPLES.resolve("05-blower-feeder-undersized.yaml"), good);
-        assertThat(run("sheet", good.toString(), "-o", out.toString()).code(), is(ExitCodes.CHECK_FAILED));
+        assertThat(run("sheet", good.toString(), "-o", out.toString(), "--format", "svg,png").code(),
+                is(ExitCodes.CHECK_FAILED));
         byte[] before = Files.readAllBytes(out.resolve("feeder.png"));
         Files.writeString(good, "format: 1\ntitle: [broken\n");
-        assertThat(run("sheet", good.toString(), "-o", out.toString()).code(), is(ExitCodes.BAD_INPUT));
+        assertThat(run("sheet", good.toString(), "-o", out.toString(), "--format", "svg,png").code(),
+                is(ExitCodes.BAD_INPUT));
         assertThat("feeder.png was changed by the failed run", java.util.Arrays.equals(before, Files.readAllBytes(out.resolve("feeder.png"))), is(true));
         assertThat(files(out), is(List.of("feeder.png", "feeder.report.json", "feeder.svg")));
     }
@@ -80,6 +82,16 @@ class CliTest {
         // the network study adds a sheet per path: two paths in three formats
         assertThat(r.out(), containsString("sheets: 7 studies, 6 pass, 1 fail, 0 not read; 34 files in"));
         assertThat(files(tmp).size(), is(34));
+    }
+
+    @Test
+    void aSheetIsSvgUnlessAskedOtherwise(@TempDir Path tmp) throws Exception {
+        InProcess.Run r = run("sheet", SAMPLES.toString(), "-o", tmp.toString());
+        assertThat(r.code(), is(ExitCodes.CHECK_FAILED));
+        // nine sheets (the network study draws two paths besides its summary) and seven reports
+        assertThat(r.out(), containsString("sheets: 7 studies, 6 pass, 1 fail, 0 not read; 16 files in"));
+        assertThat(files(tmp).stream().filter(f -> !f.endsWith(".svg") && !f.endsWith(".report.json")).toList(),
+                is(List.of()));
     }
 
     @Test
@@ -125,8 +137,7 @@ class CliTest {
         Files.copy(SAMPLES.resolve("02-filter-house-fuse.yaml"), study);
         Path out = tmp.resolve("out");
         assertThat(run("sheet", study.toString(), "-o", out.toString()).code(), is(ExitCodes.PASS));
-        assertThat(files(out), is(List.of("..%2F..%2Fescape.png", "..%2F..%2Fescape.report.json",
-                "..%2F..%2Fescape.svg").stream().map(coordination.plot.sheet.SheetWriter::safeName).toList()));
+        assertThat(files(out), is(List.of("..%2F..%2Fescape.report.json", "..%2F..%2Fescape.svg").stream().map(coordination.plot.sheet.SheetWriter::safeName).toList()));
     }
 
     @Test
@@ -144,7 +155,7 @@ class CliTest {
         assertThat(r.code(), is(ExitCodes.BAD_INPUT));
         assertThat(r.err(), containsString("feeder.report.json is a folder or a link - it is not replaced"));
         assertThat("feeder.svg was changed by the failed run", java.util.Arrays.equals(svg, Files.readAllBytes(out.resolve("feeder.svg"))), is(true));
-        assertThat(files(out), is(List.of("feeder.png", "feeder.report.json", "feeder.svg")));
+        assertThat(files(out), is(List.of("feeder.report.json", "feeder.svg")));
     }
 
     @Test
@@ -167,7 +178,7 @@ class CliTest {
         Path out = tmp.resolve("out");
         InProcess.Run r = run("sheet", in.toString(), "-o", out.toString());
         assertThat(r.code(), is(ExitCodes.BAD_INPUT));
-        assertThat(files(out), is(List.of("good.png", "good.report.json", "good.svg")));
+        assertThat(files(out), is(List.of("good.report.json", "good.svg")));
         // the user's study files are never touched
         assertThat("the study file good.yaml was changed", java.util.Arrays.equals(before, Files.readAllBytes(in.resolve("good.yaml"))), is(true));
     }
