@@ -137,8 +137,7 @@ public final class LogAxis {
             }
             if (i == 0 || i == last) {
                 int inner = i == 0 ? 1 : last - 1;
-                double probe = xs[i] + (xs[inner] - xs[i]) * 1e-6;
-                if (!(f.applyAsDouble(probe) < vs[i])) {
+                if (!(f.applyAsDouble(inwardProbe(xs, i)) < vs[i])) {
                     continue;
                 }
                 Point p = refineMinimum(f, Math.min(xs[i], xs[inner]), Math.max(xs[i], xs[inner]),
@@ -154,6 +153,19 @@ public final class LogAxis {
             }
         }
         return result;
+    }
+
+    /**
+     * The point just inside a scan's end at which {@link #minimum(DoubleUnaryOperator, double[], double[])}
+     * asks whether the function falls when moving inwards from that end.
+     *
+     * @param xs ascending scan points, at least two
+     * @param end 0 or the last index
+     * @return the probe's x
+     */
+    public static double inwardProbe(double[] xs, int end) {
+        int inner = end == 0 ? 1 : end - 1;
+        return xs[end] + (xs[inner] - xs[end]) * 1e-6;
     }
 
     /**
@@ -211,8 +223,21 @@ public final class LogAxis {
      * @return the root, or NaN if the ends do not bracket one
      */
     public static double monotoneRoot(DoubleUnaryOperator f, double xa, double xb) {
-        double fa = f.applyAsDouble(xa);
-        double fb = f.applyAsDouble(xb);
+        return monotoneRoot(f, xa, xb, f.applyAsDouble(xa), f.applyAsDouble(xb));
+    }
+
+    /**
+     * The single root of a monotonic function in [xa, xb] from its values at the ends, which the
+     * caller has already evaluated.
+     *
+     * @param f a monotonic function of x
+     * @param xa left end
+     * @param xb right end
+     * @param fa f(xa)
+     * @param fb f(xb)
+     * @return the root, or NaN if the ends do not bracket one
+     */
+    public static double monotoneRoot(DoubleUnaryOperator f, double xa, double xb, double fa, double fb) {
         if (fa == 0.0) {
             return xa;
         }

@@ -88,6 +88,37 @@ public final class SmoothScan {
     }
 
     /**
+     * Takes a segment on which the caller has shown, from the curves' forms, that every function
+     * falls strictly from one scan point to the next and that the crossing function keeps one
+     * sign. The scan of such a segment finds each minimum at the upper end, has no root, and asks
+     * only whether each function falls when moving inwards from that end; this asks the same with
+     * the same probes, so the result is the scan's to the last bit without the points in between.
+     *
+     * @param s the segment
+     * @param atStart the functions' values at its lower end, as the sampler gives them
+     * @param atEnd the functions' values at its upper end
+     * @return the minima as {@link #scan} gives them, or null where a probe finds a lower value,
+     *     and the caller should scan the segment
+     */
+    public LogAxis.Point[] falling(SegmentWalk.Segment s, double[] atStart, double[] atEnd) {
+        double[] xs = LogAxis.scanPoints(s.xa(), s.xb());
+        int last = xs.length - 1;
+        double probe = LogAxis.inwardProbe(xs, last);
+        LogAxis.Point[] minima = new LogAxis.Point[minimised];
+        for (int f = 0; f < minimised; f++) {
+            if (functions[f].applyAsDouble(probe) < atEnd[f]) {
+                return null;
+            }
+            minima[f] = new LogAxis.Point(xs[last], atEnd[f]);
+        }
+        if (!s.first() && !Double.isNaN(previous) && crosses(previous, atStart[crossing])) {
+            addCrossing(s.a());
+        }
+        previous = atEnd[crossing];
+        return minima;
+    }
+
+    /**
      * Sets what the crossing function is taken to be at the end of a segment that was not scanned:
      * NaN where nothing is known (a curve without value), an infinity of the sign the check chooses
      * where a device does not operate.

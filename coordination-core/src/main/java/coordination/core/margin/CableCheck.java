@@ -39,6 +39,11 @@ public final class CableCheck {
     private static final double[] WINDOW_EDGES_SECONDS = {CableThermalLimit.ADIABATIC_MIN_SECONDS,
         CableThermalLimit.ADIABATIC_MAX_SECONDS};
 
+    /** Narrowest scan step, in ln(I), on which a steady device's segment is taken from its ends. */
+    private static final double MIN_STEADY_STEP = 1e-6;
+    /** Fall per scan step, relative to the values' size, that no rounding of them can undo. */
+    private static final double STRICT_FALL = 1e-12;
+
     private final ProtectiveDevice device;
     private final CableThermalLimit cable;
     private final double fromAmps;
@@ -49,6 +54,9 @@ public final class CableCheck {
     private final LetThroughEnergy letThrough;
     private final double letThroughFrom;
     private final double adiabaticI2t;
+    private final boolean plain;
+    private int steadySegments;
+    private final CurveMemory memory;
     private final CableCheckResult result;
 
     /**
@@ -64,6 +72,15 @@ public final class CableCheck {
      */
     public CableCheck(ProtectiveDevice device, CableThermalLimit cable, double fromAmps, double toAmps,
             MarginRequirement requirement, DcOffset dcOffset) {
+        this(device, cable, fromAmps, toAmps, requirement, dcOffset, false);
+    }
+
+    /**
+     * As the public constructor; with {@code plain} every segment is scanned and every curve time
+     * computed afresh: the reference the tests hold the shortcuts to.
+     */
+    CableCheck(ProtectiveDevice device, CableThermalLimit cable, double fromAmps, double toAmps,
+            MarginRequirement requirement, DcOffset dcOffset, boolean plain) {
         Checks.given("cable check: device", device);
         Checks.given("cable check: cable", cable);
         Checks.given("cable check: requirement", requirement);
@@ -78,6 +95,8 @@ public final class CableCheck {
         this.letThrough = device.letThrough().orElse(null);
         this.letThroughFrom = device.letThroughFromAmps();
         this.adiabaticI2t = cable.method() == ThermalMethod.NON_ADIABATIC ? Double.NaN : cable.i2tA2s();
+        this.plain = plain;
+        this.memory = plain ? null : new CurveMemory(curve);
         this.result = compute();
     }
 
@@ -101,6 +120,11 @@ public final class CableCheck {
         return result;
     }
 
+    /** @return how many segments were taken from their ends without a scan, for tests */
+    int steadySegments() {
+        return steadySegments;
+    }
+
     /**
      * The device's clearing time from its curve.
      *
@@ -108,7 +132,7 @@ public final class CableCheck {
      * @return seconds, infinity where it does not clear, NaN where the curve has no value
      */
     public double curveSeconds(double amps) {
-        return curve.isDefinedAt(amps) ? curve.seconds(amps) : Double.NaN;
+        return CurveMemory.of(curve, amps);
     }
 
     /**
@@ -119,11 +143,16 @@ public final class CableCheck {
      * @return true where the let-through energy is compared with k²S²
      */
     public boolean usesLetThrough(double amps) {
+        return letThrough != null && usesLetThrough(amps, curveSeconds(amps));
+    }
+
+    // t is the curve's time at amps, NaN where the curve has no value
+    private boolean usesLetThrough(double amps, double t) {
         if (letThrough == null || amps < letThroughFrom || !letThrough.isDefinedAt(amps)) {
             return false;
         }
-        if (curve.isDefinedAt(amps)) {
-            return curve.seconds(amps) <= CableThermalLimit.ADIABATIC_MIN_SECONDS;
+        if (!Double.isNaN(t)) {
+            return t <= CableThermalLimit.ADIABATIC_MIN_SECONDS;
         }
         return amps > curve.highestDefinedAmps();
     }
@@ -136,7 +165,11 @@ public final class CableCheck {
      * @return seconds, infinity where it does not clear, NaN where it has no value
      */
     public double deviceSeconds(double amps) {
-        return usesLetThrough(amps) ? letThrough.a2s(amps) / (amps * amps) : curveSeconds(amps);
+        return deviceSeconds(amps, curveSeconds(amps));
+    }
+
+    private double deviceSeconds(double amps, double t) {
+        return usesLetThrough(amps, t) ? letThrough.a2s(amps) / (amps * amps) : t;
     }
 
     /**
@@ -147,14 +180,22 @@ public final class CableCheck {
      * @return seconds
      */
     public double equivalentSeconds(double amps) {
-        if (usesLetThrough(amps)) {
+        return equivalentSeconds(amps, curveSeconds(amps));
+    }
+
+    private double equivalentSeconds(double amps, double t) {
+        if (usesLetThrough(amps, t)) {
             return letThrough.a2s(amps) / (amps * amps);
         }
-        double t = curveSeconds(amps);
         if (dcOffset != null && t > 0 && Double.isFinite(t)) {
             return t * (1 + dcOffset.m(t));
         }
         return t;
+    }
+
+    // the curve's time, remembered during the check unless it is the plain reference
+    private double remembered(double amps) {
+        return memory == null ? curveSeconds(amps) : memory.seconds(amps);
     }
 
     // the cable's damage time with k²S² computed once per check
@@ -168,11 +209,11 @@ public final class CableCheck {
         CurrentSpan notCleared = new CurrentSpan();
         CurrentSpan undefined = new CurrentSpan();
         List<ThermalRegion> regions = new ArrayList<>();
-        SmoothScan scan = new SmoothScan(this::sample, new DoubleUnaryOperator[] {this::margin, this::logRatio}, 2, 1,
+        SmoothScan scan = new SmoothScan(this::sampleDevice, new DoubleUnaryOperator[] {this::margin, this::logRatio}, 2, 1,
                 fromAmps, toAmps);
         SegmentWalk.walk(splitPoints(), s -> {
-            double tMid = deviceSeconds(s.midAmps());
-            double tRight = deviceSeconds(s.rightAmps());
+            double tMid = deviceSeconds(s.midAmps(), remembered(s.midAmps()));
+            double tRight = deviceSeconds(s.rightAmps(), remembered(s.rightAmps()));
             if (Double.isNaN(tMid) || Double.isNaN(tRight)) {
                 undefined.add(s.a(), s.b());
                 addRegion(regions, s.a(), s.b(), ThermalRegion.UNDEFINED);
@@ -193,12 +234,15 @@ public final class CableCheck {
                 // an inverse stage's asymptote at its pickup: the margin has no lower bound there
                 margin.unbounded(s.a(), s.first());
                 ratio.unbounded(s.a(), s.first());
-                if (s.first() && Double.isInfinite(deviceSeconds(s.a()))) {
+                if (s.first() && Double.isInfinite(deviceSeconds(s.a(), remembered(s.a())))) {
                     notCleared.add(s.a(), s.a());
                 }
                 seg = s.from(Math.min(s.xb(), s.xa() + LogAxis.DIVERGENCE_PROBE));
             }
-            LogAxis.Point[] minima = scan.scan(seg);
+            LogAxis.Point[] minima = steadyDeviceSegment(scan, seg);
+            if (minima == null) {
+                minima = scan.scan(seg);
+            }
             margin.offer(minima[0], seg);
             ratio.offer(minima[1], seg);
         });
@@ -211,26 +255,72 @@ public final class CableCheck {
                 notCleared.from(), notCleared.to(), undefined.from(), undefined.to(), regions);
     }
 
-    private void sample(double x, double[] values) {
+    /** Fills the margin and the log ratio at x and returns the device's equivalent time there. */
+    private double sampleDevice(double x, double[] values) {
         double amps = Math.exp(x);
-        double te = equivalentSeconds(amps);
+        double te = equivalentSeconds(amps, remembered(amps));
         double tc = cableSeconds(amps);
         values[0] = tc - te;
         values[1] = te == 0.0 ? Double.POSITIVE_INFINITY : Math.log(tc / te);
+        return te;
+    }
+
+    /**
+     * A segment where the device's time is the same at both ends, and so throughout, since a
+     * device's time never rises with current: against an adiabatic limit k²S²/I² both the margin
+     * and the log ratio then fall strictly, and the scan's answer is known from the ends (see
+     * {@link SmoothScan#falling}). Returns null, for the scan to decide, wherever that is not
+     * shown beyond rounding: a let-through energy that may take over inside, a time of 0 or
+     * infinity, a crossing, or a segment so narrow that neighbouring scan points could round to
+     * equal values.
+     */
+    private LogAxis.Point[] steadyDeviceSegment(SmoothScan scan, SegmentWalk.Segment seg) {
+        if (plain || letThrough != null || Double.isNaN(adiabaticI2t)) {
+            return null;
+        }
+        double step = (seg.xb() - seg.xa()) / (LogAxis.SCAN_POINTS - 1);
+        if (!(step >= MIN_STEADY_STEP)) {
+            return null;
+        }
+        double[] atStart = new double[2];
+        double[] atEnd = new double[2];
+        double ta = sampleDevice(seg.xa(), atStart);
+        double tb = sampleDevice(seg.xb(), atEnd);
+        if (ta != tb || !(ta > 0) || !Double.isFinite(ta)) {
+            return null;
+        }
+        boolean oneSign = atStart[1] > 0 && atEnd[1] > 0 || atStart[1] < 0 && atEnd[1] < 0;
+        if (!oneSign || !Double.isFinite(atStart[1]) || !Double.isFinite(atEnd[1])) {
+            return null;
+        }
+        // each step lowers the cable's time by at least 2·step·tc(xb) and the log ratio by 2·step:
+        // both far above the rounding of values of the size met on the segment
+        double tcStart = cableSeconds(Math.exp(seg.xa()));
+        double tcEnd = cableSeconds(Math.exp(seg.xb()));
+        boolean marginFalls = 2 * step * tcEnd > STRICT_FALL * Math.max(tcStart, ta);
+        boolean ratioFalls = 2 * step > STRICT_FALL * Math.max(1.0, Math.max(Math.abs(atStart[1]), Math.abs(atEnd[1])));
+        LogAxis.Point[] minima = marginFalls && ratioFalls ? scan.falling(seg, atStart, atEnd) : null;
+        if (minima != null) {
+            steadySegments++;
+        }
+        return minima;
     }
 
     private boolean divergesAt(double x) {
-        return LogAxis.divergesAt(v -> deviceSeconds(Math.exp(v)), x);
+        return LogAxis.divergesAt(v -> {
+            double amps = Math.exp(v);
+            return deviceSeconds(amps, remembered(amps));
+        }, x);
     }
 
     private double margin(double x) {
         double amps = Math.exp(x);
-        return cableSeconds(amps) - equivalentSeconds(amps);
+        return cableSeconds(amps) - equivalentSeconds(amps, remembered(amps));
     }
 
     private double logRatio(double x) {
         double amps = Math.exp(x);
-        double te = equivalentSeconds(amps);
+        double te = equivalentSeconds(amps, remembered(amps));
         if (te == 0.0) {
             return Double.POSITIVE_INFINITY;
         }
@@ -238,7 +328,7 @@ public final class CableCheck {
     }
 
     private String method(double amps, double deviceSeconds) {
-        if (usesLetThrough(amps)) {
+        if (usesLetThrough(amps, remembered(amps))) {
             return ThermalRegion.ENERGY_LET_THROUGH;
         }
         if (deviceSeconds < CableThermalLimit.ADIABATIC_MIN_SECONDS) {
@@ -263,6 +353,11 @@ public final class CableCheck {
         }
     }
 
+    private double logCurveSeconds(double x) {
+        double amps = Math.exp(x);
+        return Math.log(remembered(amps));
+    }
+
     /** The range ends, the device's and the cable's breakpoints inside, the let-through's, and the window edges. */
     private double[] splitPoints() {
         double[] energy = letThrough == null ? new double[0] : letThrough.breakpointsAmps();
@@ -273,13 +368,16 @@ public final class CableCheck {
         double[] edges = new double[2 * base.length];
         int[] m = {0};
         SegmentWalk.walk(base, s -> {
-            if (!(s.xb() > s.xa()) || Double.isNaN(curveSeconds(s.midAmps()))) {
+            if (!(s.xb() > s.xa()) || Double.isNaN(remembered(s.midAmps()))) {
                 return;
             }
             // the clearing time never rises with current, so each limit is passed at most once per segment
+            double logA = logCurveSeconds(s.xa());
+            double logB = logCurveSeconds(s.xb());
             for (double limit : WINDOW_EDGES_SECONDS) {
                 double logLimit = Math.log(limit);
-                double r = LogAxis.monotoneRoot(x -> Math.log(curveSeconds(Math.exp(x))) - logLimit, s.xa(), s.xb());
+                double r = LogAxis.monotoneRoot(x -> logCurveSeconds(x) - logLimit, s.xa(), s.xb(), logA - logLimit,
+                        logB - logLimit);
                 if (!Double.isNaN(r)) {
                     edges[m[0]++] = Math.exp(r);
                 }

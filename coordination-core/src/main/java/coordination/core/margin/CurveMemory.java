@@ -1,0 +1,58 @@
+package coordination.core.margin;
+
+import coordination.core.curve.TimeCurrentCurve;
+import java.util.Arrays;
+
+/**
+ * A curve's times at the currents a check has already asked for. A check asks again at the same
+ * currents (the ends and middles of its segments, from its walks, scans and probes), and a curve's
+ * time is a function of the current alone, so a remembered time is the computed one to the last
+ * bit. Sixteen slots, chosen by a hash of the current; a newer current takes over a slot. One
+ * check's own, on the thread that runs it.
+ */
+final class CurveMemory {
+    private static final int BITS = 4;
+
+    private final TimeCurrentCurve curve;
+    private final double[] amps = new double[1 << BITS];
+    private final double[] seconds = new double[1 << BITS];
+
+    /**
+     * Creates an empty memory.
+     *
+     * @param curve the curve
+     */
+    CurveMemory(TimeCurrentCurve curve) {
+        this.curve = curve;
+        Arrays.fill(amps, Double.NaN);
+    }
+
+    /**
+     * The curve's time at a current.
+     *
+     * @param current amperes
+     * @return seconds, infinity where the device does not operate, NaN where the curve has no value
+     */
+    double seconds(double current) {
+        long bits = Double.doubleToRawLongBits(current);
+        int slot = (int) ((bits * 0x9E3779B97F4A7C15L) >>> (64 - BITS));
+        if (amps[slot] == current) {
+            return seconds[slot];
+        }
+        double t = of(curve, current);
+        amps[slot] = current;
+        seconds[slot] = t;
+        return t;
+    }
+
+    /**
+     * A curve's time without memory.
+     *
+     * @param curve the curve
+     * @param current amperes
+     * @return seconds, infinity where the device does not operate, NaN where the curve has no value
+     */
+    static double of(TimeCurrentCurve curve, double current) {
+        return curve.isDefinedAt(current) ? curve.seconds(current) : Double.NaN;
+    }
+}
