@@ -209,8 +209,8 @@ public final class CableCheck {
         CurrentSpan notCleared = new CurrentSpan();
         CurrentSpan undefined = new CurrentSpan();
         List<ThermalRegion> regions = new ArrayList<>();
-        SmoothScan scan = new SmoothScan(this::sampleDevice, new DoubleUnaryOperator[] {this::margin, this::logRatio}, 2, 1,
-                fromAmps, toAmps);
+        SmoothScan scan = new SmoothScan(this::sampleDevice, new DoubleUnaryOperator[] {this::margin, this::logRatio},
+                2, 1, fromAmps, toAmps);
         SegmentWalk.walk(splitPoints(), s -> {
             double tMid = deviceSeconds(s.midAmps(), remembered(s.midAmps()));
             double tRight = deviceSeconds(s.rightAmps(), remembered(s.rightAmps()));
@@ -286,7 +286,9 @@ public final class CableCheck {
         double[] atEnd = new double[2];
         double ta = sampleDevice(seg.xa(), atStart);
         double tb = sampleDevice(seg.xb(), atEnd);
-        if (ta != tb || !(ta > 0) || !Double.isFinite(ta)) {
+        // the curve's own times equal too, not only the DC-offset equivalents made of them
+        boolean steady = ta == tb && remembered(Math.exp(seg.xa())) == remembered(Math.exp(seg.xb()));
+        if (!steady || !(ta > 0) || !Double.isFinite(ta)) {
             return null;
         }
         boolean oneSign = atStart[1] > 0 && atEnd[1] > 0 || atStart[1] < 0 && atEnd[1] < 0;
