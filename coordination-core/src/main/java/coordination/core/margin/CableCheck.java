@@ -143,12 +143,16 @@ public final class CableCheck {
      * @return true where the let-through energy is compared with k²S²
      */
     public boolean usesLetThrough(double amps) {
-        return letThrough != null && usesLetThrough(amps, curveSeconds(amps));
+        return letThroughStated(amps) && usesLetThrough(amps, curveSeconds(amps));
+    }
+
+    private boolean letThroughStated(double amps) {
+        return letThrough != null && amps >= letThroughFrom && letThrough.isDefinedAt(amps);
     }
 
     // t is the curve's time at amps, NaN where the curve has no value
     private boolean usesLetThrough(double amps, double t) {
-        if (letThrough == null || amps < letThroughFrom || !letThrough.isDefinedAt(amps)) {
+        if (!letThroughStated(amps)) {
             return false;
         }
         if (!Double.isNaN(t)) {
