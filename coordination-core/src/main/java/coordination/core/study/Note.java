@@ -23,4 +23,17 @@ public record Note(String code, String message) implements Serializable {
             throw new IllegalArgumentException("note: found an empty code or message - both must be given");
         }
     }
+
+    // Written out: a record's own equals and hashCode are bootstrapped at their first call, and every
+    // check's notes are compared, so the bootstrap cost a cold run a tenth of its Java time.
+
+    @Override
+    public boolean equals(Object o) {
+        return o instanceof Note n && code.equals(n.code) && message.equals(n.message);
+    }
+
+    @Override
+    public int hashCode() {
+        return 31 * code.hashCode() + message.hashCode();
+    }
 }

@@ -2,6 +2,7 @@ package coordination.core.curve;
 
 import static org.hamcrest.MatcherAssert.assertThat;
 import static org.hamcrest.Matchers.closeTo;
+import static org.hamcrest.Matchers.is;
 
 import org.junit.jupiter.api.Test;
 
@@ -28,4 +29,15 @@ class RelayEdgesTest {
         }
     }
 
+
+    /** Only the all-zero tolerance is none, as the record's equality with NONE said. */
+    @Test
+    void onlyTheZeroToleranceIsNone() {
+        assertThat(new RelayTolerance(0, 0, 0).isNone(), is(true));
+        assertThat(RelayTolerance.NONE.isNone(), is(true));
+        assertThat(new RelayTolerance(0.05, 0, 0).isNone(), is(false));
+        assertThat(new RelayTolerance(0, 0.03, 0).isNone(), is(false));
+        assertThat(new RelayTolerance(0, 0, 1e-9).isNone(), is(false));
+        assertThat(new RelayTolerance(0, 0, 0.05).isNone(), is(new RelayTolerance(0, 0, 0.05).equals(RelayTolerance.NONE)));
+    }
 }

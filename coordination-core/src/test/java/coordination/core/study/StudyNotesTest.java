@@ -115,4 +115,16 @@ class StudyNotesTest {
         assertThat(r.minMarginSeconds(), is(0.39776519174926045));
         assertThat(r.minMarginAtAmps(), is(25000.0));
     }
+
+    /** Note's written-out equality is the record's: both parts, and a hash that agrees. */
+    @Test
+    void notesAreEqualByCodeAndMessage() {
+        Note a = new Note("dc-offset-kappa-assumed", "κ 1.8 assumed");
+        assertThat(a.equals(new Note("dc-offset-kappa-assumed", "κ 1.8 assumed")), is(true));
+        assertThat(a.hashCode(), is(new Note("dc-offset-kappa-assumed", "κ 1.8 assumed").hashCode()));
+        assertThat(a.equals(new Note("dc-offset-kappa-assumed", "κ 2 assumed")), is(false));
+        assertThat(a.equals(new Note("other-code", "κ 1.8 assumed")), is(false));
+        assertThat(a.equals(null), is(false));
+        assertThat(List.of(a).contains(new Note("dc-offset-kappa-assumed", "κ 1.8 assumed")), is(true));
+    }
 }
