@@ -10,7 +10,6 @@ import java.awt.RenderingHints;
 import java.awt.image.BufferedImage;
 import java.io.ByteArrayOutputStream;
 import java.io.IOException;
-import java.io.StringWriter;
 import java.lang.ref.SoftReference;
 import java.nio.charset.StandardCharsets;
 import java.security.MessageDigest;
@@ -24,12 +23,6 @@ import java.util.TimeZone;
 import java.util.function.Consumer;
 import javax.xml.parsers.DocumentBuilderFactory;
 import javax.xml.parsers.ParserConfigurationException;
-import javax.xml.transform.OutputKeys;
-import javax.xml.transform.Transformer;
-import javax.xml.transform.TransformerException;
-import javax.xml.transform.TransformerFactory;
-import javax.xml.transform.dom.DOMSource;
-import javax.xml.transform.stream.StreamResult;
 import org.apache.pdfbox.cos.COSArray;
 import org.apache.pdfbox.cos.COSName;
 import org.apache.pdfbox.cos.COSString;
@@ -41,6 +34,7 @@ import org.apache.pdfbox.pdmodel.common.PDRectangle;
 import org.apache.pdfbox.pdmodel.graphics.form.PDFormXObject;
 import org.apache.batik.svggen.SVGGeneratorContext;
 import org.apache.batik.svggen.SVGGraphics2D;
+import org.w3c.dom.DOMImplementation;
 import org.w3c.dom.Document;
 import org.w3c.dom.Element;
 
@@ -113,19 +107,30 @@ public final class Drawing {
     }
 
     private static byte[] svg(double w, double h, Consumer<Graphics2D> painter) throws IOException {
-        Document doc;
-        try {
-            doc = XML.get().documents.newDocumentBuilder().getDOMImplementation()
-                    .createDocument(SVG_NS, "svg", null);
-        } catch (ParserConfigurationException e) {
-            throw new IllegalStateException("the platform's XML parser cannot create a document", e);
-        }
+        return SvgFonts.embed(SvgWriter.write(svgTree(w, h, painter))).getBytes(StandardCharsets.UTF_8);
+    }
+
+    /**
+     * The SVG generator's element tree of a painting, before the faces are embedded.
+     *
+     * @param w width in points
+     * @param h height in points
+     * @param painter draws on a Graphics2D whose unit is one point
+     * @return the root element
+     */
+    static Element svgTree(double w, double h, Consumer<Graphics2D> painter) {
+        Document doc = Dom.IMPLEMENTATION.createDocument(SVG_NS, "svg", null);
         SVGGeneratorContext ctx = SVGGeneratorContext.createDefault(doc);
         ctx.setComment(null);
         // a hundredth of a point is far below what any viewer shows, and halves the document
         ctx.setPrecision(2);
         // text as text, in the faces SvgFonts embeds
         ctx.setEmbeddedFontsOn(false);
+        // the page's own face as the document's default, rather than the platform's logical one, whose
+        // family name would have the font manager look through every face installed on the machine
+        SVGGeneratorContext.GraphicContextDefaults defaults = new SVGGeneratorContext.GraphicContextDefaults();
+        defaults.setFont(Fonts.of(java.awt.Font.PLAIN, 12));
+        ctx.setGraphicContextDefaults(defaults);
         SVGGraphics2D g = new SVGGraphics2D(ctx, false);
         hints(g);
         painter.accept(g);
@@ -136,27 +141,27 @@ public final class Drawing {
         root.setAttribute("height", number(h) + "pt");
         root.setAttribute("viewBox", "0 0 " + number(w) + " " + number(h));
         g.dispose();
-        // the platform's serializer, not the generator's own writer: one element per tag without line
-        // breaks inside tags, and no document type that a browser would fetch
-        StringWriter out = new StringWriter();
-        try {
-            Transformer t = XML.get().transformers.newTransformer();
-            t.setOutputProperty(OutputKeys.ENCODING, "UTF-8");
-            t.transform(new DOMSource(root), new StreamResult(out));
-        } catch (TransformerException e) {
-            throw new IOException("SVG: the document could not be written: " + e.getMessage(), e);
-        }
-        return SvgFonts.embed(out.toString()).getBytes(StandardCharsets.UTF_8);
+        return root;
     }
 
     private static final String SVG_NS = "http://www.w3.org/2000/svg";
 
-    /** The platform's XML factories, looked up once per thread: the lookup costs more than a sheet's writing. */
-    private record Xml(DocumentBuilderFactory documents, TransformerFactory transformers) {
-    }
+    /** The platform's DOM, found once, when the first SVG is drawn. */
+    private static final class Dom {
+        static final DOMImplementation IMPLEMENTATION;
 
-    private static final ThreadLocal<Xml> XML = ThreadLocal.withInitial(() -> new Xml(
-            DocumentBuilderFactory.newInstance(), TransformerFactory.newInstance()));
+        static {
+            try {
+                // the platform's own factory, without the service lookup through every jar on the class path
+                IMPLEMENTATION = DocumentBuilderFactory.newDefaultInstance().newDocumentBuilder().getDOMImplementation();
+            } catch (ParserConfigurationException e) {
+                throw new IllegalStateException("the platform's XML parser cannot create a document", e);
+            }
+        }
+
+        private Dom() {
+        }
+    }
 
     private static String number(double v) {
         double r = Math.round(v * 100) / 100.0;

@@ -83,12 +83,10 @@ final class SvgFonts {
     }
 
     private static String subset(String file, TreeSet<Integer> used) throws IOException {
-        byte[] bytes;
-        try (InputStream in = Fonts.open(file)) {
-            bytes = in.readAllBytes();
-        }
+        TrueTypeFont ttf = face(file);
         ByteArrayOutputStream out = new ByteArrayOutputStream();
-        try (TrueTypeFont ttf = new TTFParser().parse(new RandomAccessReadBuffer(bytes))) {
+        // a parsed face reads its glyphs from one stream as it goes: one subset at a time
+        synchronized (ttf) {
             // the layout tables (GPOS, GSUB, kern) would keep the whole font's glyph numbers; Java 2D
             // measured the text without them, so the browser draws it without them too
             TTFSubsetter subset = new TTFSubsetter(ttf, TABLES);
@@ -96,6 +94,25 @@ final class SvgFonts {
             subset.writeToStream(out);
         }
         return Base64.getEncoder().encodeToString(out.toByteArray());
+    }
+
+    /**
+     * The two faces, by file, parsed once per process when the first SVG embeds them: parsing costs
+     * ten times a subset's making, and a process draws all its sheets in the same two faces.
+     */
+    private static final Map<String, TrueTypeFont> FACES = new java.util.HashMap<>();
+
+    private static TrueTypeFont face(String file) throws IOException {
+        synchronized (FACES) {
+            TrueTypeFont ttf = FACES.get(file);
+            if (ttf == null) {
+                try (InputStream in = Fonts.open(file)) {
+                    ttf = new TTFParser().parse(new RandomAccessReadBuffer(in.readAllBytes()));
+                }
+                FACES.put(file, ttf);
+            }
+            return ttf;
+        }
     }
 
     private static String unescape(String s) {
