@@ -121,6 +121,9 @@ final class SheetCommand implements Callable<Integer> {
         if (files == null) {
             return ExitCodes.BAD_INPUT;
         }
+        if (files.size() == 1 && !incremental) {
+            SheetWarmUp.start(chosen);
+        }
         // every output name, and the study that writes it: two studies writing one name, or a study
         // writing over one of the inputs, are refused; the others go ahead
         Map<String, Path> owner = new HashMap<>();

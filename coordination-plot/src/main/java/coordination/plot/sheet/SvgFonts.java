@@ -102,6 +102,16 @@ final class SvgFonts {
      */
     private static final Map<String, TrueTypeFont> FACES = new java.util.HashMap<>();
 
+    /**
+     * Parses both faces, if not yet done, so that the first sheet's embedding finds them ready.
+     *
+     * @throws IOException if a face cannot be read
+     */
+    static void prepare() throws IOException {
+        face(Fonts.REGULAR_FILE);
+        face(Fonts.BOLD_FILE);
+    }
+
     private static TrueTypeFont face(String file) throws IOException {
         synchronized (FACES) {
             TrueTypeFont ttf = FACES.get(file);

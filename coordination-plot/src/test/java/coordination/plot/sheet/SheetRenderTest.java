@@ -244,4 +244,27 @@ class SheetRenderTest {
             pool.shutdownNow();
         }
     }
+
+    /** Preparing the formats on another thread, as a cold `sheet` does, changes no byte of a sheet. */
+    @org.junit.jupiter.api.Test
+    void preparingOnAnotherThreadChangesNoByte() throws Exception {
+        CoordinationSheet sheet = sheet(Path.of("../samples/01-main-switchboard-incomer.yaml"));
+        java.util.Map<OutputFormat, byte[]> before = new java.util.EnumMap<>(OutputFormat.class);
+        for (OutputFormat f : OutputFormat.values()) {
+            before.put(f, sheet.render(f, 150));
+        }
+        ExecutorService other = Executors.newSingleThreadExecutor();
+        try {
+            Future<?> prepared = other.submit(() -> {
+                Drawing.prepare(java.util.EnumSet.allOf(OutputFormat.class));
+                return null;
+            });
+            for (OutputFormat f : OutputFormat.values()) {
+                assertThat(f + " bytes", Arrays.equals(sheet.render(f, 150), before.get(f)), is(true));
+            }
+            prepared.get();
+        } finally {
+            other.shutdownNow();
+        }
+    }
 }
