@@ -73,6 +73,9 @@ public final class ArchiveTraining {
         codes.add(Cli.run(sink, sink, with("check", files)));
         codes.add(Cli.run(sink, sink, with("check", List.of("--json", files.get(0)))));
         codes.add(Cli.run(sink, sink, with("check", List.of("--json", files.get(0), network))));
+        // one study alone: the path that prepares the formats on a second thread
+        codes.add(Cli.run(sink, sink, "sheet", files.get(0), "-o", dir.resolve("one").toString(), "--format",
+                "svg,png,pdf", "--quiet"));
         codes.add(Cli.run(sink, sink, with("sheet", List.of(files.get(0), network, "-o", dir.resolve("out").toString(),
                 "--format", "svg,png,pdf", "--quiet"))));
         codes.add(Cli.run(sink, sink, "faults", network, "--json"));
