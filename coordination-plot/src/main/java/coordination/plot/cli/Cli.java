@@ -119,10 +119,6 @@ public final class Cli implements Callable<Integer> {
      */
     public static void main(String[] args) {
         System.setProperty("java.awt.headless", "true");
-        if (args.length > 1 && args[0].equals("sheet")) {
-            // the default format's first-use work, while the command line is parsed and the study read
-            SheetWarmUp.start(java.util.Set.of(coordination.plot.sheet.OutputFormat.SVG));
-        }
         PrintStream out = new PrintStream(new java.io.FileOutputStream(java.io.FileDescriptor.out), true,
                 StandardCharsets.UTF_8);
         System.exit(run(out, System.err, args));
