@@ -84,6 +84,12 @@ public record DefiniteTimeStage(double pickupAmps, double delaySeconds, double f
         return amps >= pickupAmps ? delaySeconds : Double.POSITIVE_INFINITY;
     }
 
+    /** Flat where it operates; a stretch with the pickup inside it holds a step. */
+    @Override
+    public double logSlopeBound(double fromAmps, double toAmps) {
+        return fromAmps >= pickupAmps || toAmps < pickupAmps ? 0.0 : Double.POSITIVE_INFINITY;
+    }
+
     @Override
     public TimeCurrentCurve edge(Edge edge, RelayTolerance tolerance) {
         double pickup = tolerance.pickupAmps(pickupAmps, edge);

@@ -47,6 +47,16 @@ public final class FastestOfCurve implements TimeCurrentCurve {
         return t;
     }
 
+    /** The fastest of several curves is no steeper than the steepest of those that operate. */
+    @Override
+    public double logSlopeBound(double fromAmps, double toAmps) {
+        double bound = 0.0;
+        for (TimeCurrentCurve s : stages) {
+            bound = Math.max(bound, s.logSlopeBound(fromAmps, toAmps));
+        }
+        return bound;
+    }
+
     @Override
     public double[] breakpointsAmps() {
         double[][] parts = new double[stages.length + 1][];

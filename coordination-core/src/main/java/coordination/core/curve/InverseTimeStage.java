@@ -33,6 +33,9 @@ public record InverseTimeStage(
         double upperMultiple,
         String label) implements RelayStage, Invertible {
 
+    /** Relative widening of {@link #logSlopeBound}, far above the rounding of its computation. */
+    private static final double SLOPE_WIDENING = 1e-9;
+
     /** The upper multiple of pickup that IEC 60255-151 states for the curves (common practice: 20). */
     public static final double STANDARD_UPPER_MULTIPLE = 20.0;
 
@@ -184,6 +187,28 @@ public record InverseTimeStage(
         // expm1 keeps (M^p - 1) accurate for small p and M close to 1
         double denominator = Math.expm1(exponent * Math.log(m));
         return multiplier * (aSeconds / denominator + bSeconds);
+    }
+
+    /**
+     * The steepness {@code p / (1 - M^-p)} at the stretch's lowest multiple M: the slope of the
+     * equation with B = 0, which B above 0 only lessens, and which falls as M rises. A held stretch
+     * is flat.
+     */
+    @Override
+    public double logSlopeBound(double fromAmps, double toAmps) {
+        if (toAmps <= pickupAmps) {
+            return 0.0;
+        }
+        if (fromAmps <= pickupAmps) {
+            // the time falls from infinity at the pickup
+            return Double.POSITIVE_INFINITY;
+        }
+        double m = fromAmps / pickupAmps;
+        if (highCurrent == HighCurrentBehaviour.HOLD_AT_UPPER_MULTIPLE && m >= upperMultiple) {
+            return 0.0;
+        }
+        // widened by far more than the rounding of its own evaluation
+        return (1 + SLOPE_WIDENING) * exponent / -Math.expm1(-exponent * Math.log(m));
     }
 
     @Override

@@ -35,6 +35,12 @@ final class ScaledCurve implements TimeCurrentCurve {
         return t + addedSeconds;
     }
 
+    /** A constant added time makes no curve steeper in ln t; the current scale moves the stretch. */
+    @Override
+    public double logSlopeBound(double fromAmps, double toAmps) {
+        return base.logSlopeBound(fromAmps / factor, toAmps / factor);
+    }
+
     // amps / factor may round just outside the base's interval at its very ends
     private double clampToBase(double baseAmps) {
         return Math.min(Math.max(baseAmps, base.lowestDefinedAmps()), base.highestDefinedAmps());

@@ -56,6 +56,22 @@ public interface TimeCurrentCurve extends Serializable {
     double[] breakpointsAmps();
 
     /**
+     * A bound on how steeply the curve falls between two currents with no breakpoint between them:
+     * for any two currents I1 &lt; I2 in {@code [fromAmps, toAmps]}, {@code ln t(I1) - ln t(I2)} is at
+     * most the bound times {@code ln I2 - ln I1}, and the curve either operates at every current of
+     * the stretch or at none. The margin engine uses it to show that a margin falls throughout a
+     * segment, so that the segment's minimum is at its end without a scan. A curve that states no
+     * bound returns infinity, and the engine scans.
+     *
+     * @param fromAmps lower current in amperes, above 0
+     * @param toAmps upper current in amperes, at or above {@code fromAmps}
+     * @return the bound, 0 or more, or {@link Double#POSITIVE_INFINITY} where none is stated
+     */
+    default double logSlopeBound(double fromAmps, double toAmps) {
+        return Double.POSITIVE_INFINITY;
+    }
+
+    /**
      * Whether {@link #seconds(double)} has a value at a current.
      *
      * @param amps current in amperes

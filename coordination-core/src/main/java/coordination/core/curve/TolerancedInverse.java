@@ -28,6 +28,15 @@ final class TolerancedInverse implements Invertible {
         return tolerance.seconds(base.seconds(amps), edge);
     }
 
+    /**
+     * The slow edge is the larger of {@code t (1 + e)} and {@code t + min}, neither steeper than t;
+     * the fast edge's {@code t - min} is steeper, and no bound is stated for it.
+     */
+    @Override
+    public double logSlopeBound(double fromAmps, double toAmps) {
+        return edge == Edge.SLOW ? base.logSlopeBound(fromAmps, toAmps) : Double.POSITIVE_INFINITY;
+    }
+
     @Override
     public double currentAtSeconds(double seconds) {
         double e = tolerance.timeFraction();

@@ -56,6 +56,7 @@ public final class CableCheck {
     private final double adiabaticI2t;
     private final boolean plain;
     private int steadySegments;
+    private int shapedSegments;
     private final CurveMemory memory;
     private final CableCheckResult result;
 
@@ -120,9 +121,14 @@ public final class CableCheck {
         return result;
     }
 
-    /** @return how many segments were taken from their ends without a scan, for tests */
+    /** @return how many segments of a steady device time were taken from their ends, for tests */
     int steadySegments() {
         return steadySegments;
+    }
+
+    /** @return how many segments were taken from their ends by the curve's slope bound, for tests */
+    int shapedSegments() {
+        return shapedSegments;
     }
 
     /**
@@ -243,7 +249,7 @@ public final class CableCheck {
                 }
                 seg = s.from(Math.min(s.xb(), s.xa() + LogAxis.DIVERGENCE_PROBE));
             }
-            LogAxis.Point[] minima = steadyDeviceSegment(scan, seg);
+            LogAxis.Point[] minima = fallingSegment(scan, seg);
             if (minima == null) {
                 minima = scan.scan(seg);
             }
@@ -270,15 +276,20 @@ public final class CableCheck {
     }
 
     /**
-     * A segment where the device's time is the same at both ends, and so throughout, since a
-     * device's time never rises with current: against an adiabatic limit k²S²/I² both the margin
-     * and the log ratio then fall strictly, and the scan's answer is known from the ends (see
-     * {@link SmoothScan#falling}). Returns null, for the scan to decide, wherever that is not
-     * shown beyond rounding: a let-through energy that may take over inside, a time of 0 or
-     * infinity, a crossing, or a segment so narrow that neighbouring scan points could round to
-     * equal values.
+     * A segment on which the margin and the log ratio are shown to fall strictly, so that the
+     * scan's answer is known from the ends (see {@link SmoothScan#falling}). Against an adiabatic
+     * limit k²S²/I², over a step Δ in ln I the cable's time falls by at least 2Δ times its value at
+     * the segment's end and its log by 2Δ; the device's log time falls by at most s Δ, where s is
+     * the curve's {@link TimeCurrentCurve#logSlopeBound}, and so its time by at most s Δ times its
+     * value at the start. Both falls win when {@code 2 tc(end) > s te(start)} and s &lt; 2. A
+     * device whose time is the same at both ends is steady throughout (s = 0), since a device's
+     * time never rises with current; that holds with a DC offset too. Returns null, for the scan to
+     * decide, wherever this is not shown beyond rounding: a let-through energy that may take over
+     * inside, a non-adiabatic cable, a DC offset on a curve that is not steady, a time of 0 or
+     * infinity, a crossing, a curve without a bound, or a segment so narrow that neighbouring scan
+     * points could round to equal values.
      */
-    private LogAxis.Point[] steadyDeviceSegment(SmoothScan scan, SegmentWalk.Segment seg) {
+    private LogAxis.Point[] fallingSegment(SmoothScan scan, SegmentWalk.Segment seg) {
         if (plain || letThrough != null || Double.isNaN(adiabaticI2t)) {
             return null;
         }
@@ -290,24 +301,41 @@ public final class CableCheck {
         double[] atEnd = new double[2];
         double ta = sampleDevice(seg.xa(), atStart);
         double tb = sampleDevice(seg.xb(), atEnd);
-        // the curve's own times equal too, not only the DC-offset equivalents made of them
-        boolean steady = ta == tb && remembered(Math.exp(seg.xa())) == remembered(Math.exp(seg.xb()));
-        if (!steady || !(ta > 0) || !Double.isFinite(ta)) {
+        if (!(ta > 0) || !Double.isFinite(ta) || !(tb > 0) || !Double.isFinite(tb)) {
             return null;
         }
         boolean oneSign = atStart[1] > 0 && atEnd[1] > 0 || atStart[1] < 0 && atEnd[1] < 0;
         if (!oneSign || !Double.isFinite(atStart[1]) || !Double.isFinite(atEnd[1])) {
             return null;
         }
-        // each step lowers the cable's time by at least 2·step·tc(xb) and the log ratio by 2·step:
-        // both far above the rounding of values of the size met on the segment
-        double tcStart = cableSeconds(Math.exp(seg.xa()));
-        double tcEnd = cableSeconds(Math.exp(seg.xb()));
-        boolean marginFalls = 2 * step * tcEnd > STRICT_FALL * Math.max(tcStart, ta);
-        boolean ratioFalls = 2 * step > STRICT_FALL * Math.max(1.0, Math.max(Math.abs(atStart[1]), Math.abs(atEnd[1])));
+        double ampsA = Math.exp(seg.xa());
+        double ampsB = Math.exp(seg.xb());
+        // the curve's own times equal too, not only the DC-offset equivalents made of them
+        boolean steady = ta == tb && remembered(ampsA) == remembered(ampsB);
+        double slope;
+        if (steady) {
+            slope = 0.0;
+        } else if (dcOffset == null) {
+            slope = curve.logSlopeBound(ampsA, ampsB);
+        } else {
+            return null;
+        }
+        if (!(slope < 2)) {
+            return null;
+        }
+        // each step's fall, far above the rounding of values of the size met on the segment
+        double tcStart = cableSeconds(ampsA);
+        double tcEnd = cableSeconds(ampsB);
+        boolean marginFalls = (2 * tcEnd - slope * ta) * step > STRICT_FALL * Math.max(tcStart, ta);
+        boolean ratioFalls = (2 - slope) * step
+                > STRICT_FALL * Math.max(1.0, Math.max(Math.abs(atStart[1]), Math.abs(atEnd[1])));
         LogAxis.Point[] minima = marginFalls && ratioFalls ? scan.falling(seg, atStart, atEnd) : null;
         if (minima != null) {
-            steadySegments++;
+            if (steady) {
+                steadySegments++;
+            } else {
+                shapedSegments++;
+            }
         }
         return minima;
     }

@@ -101,4 +101,28 @@ class InverseTimeStageTest {
         assertEquals("iec-standard-inverse: time multiplier: found -0.1 - must be a finite number above 0",
                 e.getMessage());
     }
+
+    @ParameterizedTest(name = "IEC standard inverse from M = {0}")
+    @org.junit.jupiter.params.provider.ValueSource(doubles = {1.1, 2, 6, 19.5})
+    void theSlopeBoundIsTheEquationsSteepnessAtTheStretchsStart(double m) {
+        // IEC 60255-151:2009 clause 5.4, B = 0: d ln t / d ln I = -p M^p / (M^p - 1), steepest at the lowest M
+        InverseTimeStage stage = InverseTimeStage.of(InverseTimeFamily.IEC_STANDARD_INVERSE, 100, 0.2);
+        double p = 0.02;
+        double exact = p * Math.pow(m, p) / (Math.pow(m, p) - 1);
+        assertThat(stage.logSlopeBound(100 * m, 100 * m * 1.5), closeTo(exact, exact * 1e-8));
+        // a central difference of the curve itself agrees
+        double h = 1e-5;
+        double numeric = (Math.log(stage.seconds(100 * m * Math.exp(-h))) - Math.log(stage.seconds(100 * m * Math.exp(h))))
+                / (2 * h);
+        assertThat(numeric, closeTo(exact, exact * 1e-6));
+    }
+
+    @org.junit.jupiter.api.Test
+    void aStretchFromThePickupHasNoBoundAndOneBelowItIsFlat() {
+        InverseTimeStage stage = InverseTimeStage.of(InverseTimeFamily.IEC_STANDARD_INVERSE, 100, 0.2);
+        assertThat(stage.logSlopeBound(100, 200), is(Double.POSITIVE_INFINITY));
+        assertThat(stage.logSlopeBound(50, 100), is(0.0));
+        InverseTimeStage held = stage.withHighCurrent(HighCurrentBehaviour.HOLD_AT_UPPER_MULTIPLE, 20);
+        assertThat(held.logSlopeBound(2000, 5000), is(0.0));
+    }
 }

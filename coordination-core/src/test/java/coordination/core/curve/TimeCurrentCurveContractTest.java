@@ -86,4 +86,44 @@ abstract class TimeCurrentCurveContractTest {
             }
         }
     }
+
+    @Test
+    void noStretchIsSteeperThanItsStatedBound() {
+        SplittableRandom r = new SplittableRandom(46);
+        for (int c = 0; c < CASES; c++) {
+            ProtectiveDevice d = device(r);
+            for (TimeCurrentCurve curve : new TimeCurrentCurve[] {d.minimumCurve(), d.maximumCurve()}) {
+                double lo = Math.max(curve.lowestDefinedAmps(), lowestOperatingAmps(d) * 0.5);
+                double hi = Math.min(curve.highestDefinedAmps(), lowestOperatingAmps(d) * 200);
+                double[] ends = coordination.core.internal.LogAxis.splitPoints(lo, hi, curve.breakpointsAmps());
+                for (int k = 1; k < ends.length; k++) {
+                    // the engine asks just inside the breakpoints, where the curve is smooth
+                    double a = ends[k - 1] * (1 + 1e-9);
+                    double b = ends[k] * (1 - 1e-9);
+                    if (!(b > a)) {
+                        continue;
+                    }
+                    double bound = curve.logSlopeBound(a, b);
+                    assertThat(curve + " on " + a + " to " + b + " A", bound, greaterThanOrEqualTo(0.0));
+                    if (Double.isInfinite(bound)) {
+                        continue;
+                    }
+                    double previous = curve.seconds(a);
+                    for (int i = 1; i <= 50; i++) {
+                        double x0 = Math.log(a) + (Math.log(b) - Math.log(a)) * (i - 1) / 50;
+                        double x1 = Math.log(a) + (Math.log(b) - Math.log(a)) * i / 50;
+                        double t = curve.seconds(Math.min(b, Math.exp(x1)));
+                        assertThat(curve + " operates on all or none of " + a + " to " + b + " A",
+                                Double.isInfinite(t), is(Double.isInfinite(previous)));
+                        if (Double.isFinite(t)) {
+                            // 1e-12 covers the rounding of the two logarithms, far below any slope's share
+                            assertThat(curve + " at " + Math.exp(x1) + " A", Math.log(previous) - Math.log(t),
+                                    lessThanOrEqualTo(bound * (x1 - x0) + 1e-12));
+                        }
+                        previous = t;
+                    }
+                }
+            }
+        }
+    }
 }

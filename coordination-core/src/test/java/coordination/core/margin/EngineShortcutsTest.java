@@ -23,9 +23,9 @@ import org.junit.jupiter.params.ParameterizedTest;
 import org.junit.jupiter.params.provider.ValueSource;
 
 /**
- * The cable check's shortcuts: where the device's time is steady on a segment it takes the
- * segment's minima from its ends instead of scanning it, and it remembers curve times it has
- * computed. The answer must be the plain check's to the last bit: every result is compared, field
+ * The cable check's shortcuts: where the device's time is steady on a segment, or the curve's
+ * slope bound shows that the margin and the ratio fall throughout it, it takes the segment's
+ * minima from its ends instead of scanning it; and it remembers curve times it has computed. The answer must be the plain check's to the last bit: every result is compared, field
  * by field with {@code equals}, against the same check with every segment scanned and every time
  * computed afresh.
  */
@@ -59,20 +59,23 @@ class EngineShortcutsTest {
         CableCheck scanned = new CableCheck(device, cable, lo, hi, req, dc, true);
         assertThat(what, quick.result(), equalTo(scanned.result()));
         steady[0] += quick.steadySegments();
-        assertThat(what + ": the scan-everything check took no shortcut", scanned.steadySegments(), equalTo(0));
+        steady[1] += quick.shapedSegments();
+        assertThat(what + ": the scan-everything check took no shortcut",
+                scanned.steadySegments() + scanned.shapedSegments(), equalTo(0));
     }
 
     @ParameterizedTest(name = "seed {0}")
     @ValueSource(longs = {11, 12, 13})
     void aSteadySegmentGivesTheScansAnswer(long seed) {
         SplittableRandom r = new SplittableRandom(seed);
-        int[] steady = {0};
+        int[] steady = {0, 0};
         for (int n = 0; n < CASES_PER_SEED; n++) {
             compare(steppedRelay(r), r, steady, "seed " + seed + " stepped relay " + n);
             compare(RandomDevices.any(r), r, steady, "seed " + seed + " device " + n);
         }
-        // the comparison means something only if the shortcut was taken often
-        assertThat("segments taken from their ends", steady[0], greaterThan(CASES_PER_SEED / 2));
+        // the comparison means something only if each shortcut was taken often
+        assertThat("steady segments taken from their ends", steady[0], greaterThan(CASES_PER_SEED / 2));
+        assertThat("segments taken from their ends by the slope bound", steady[1], greaterThan(CASES_PER_SEED / 8));
     }
 
     @Test
@@ -85,6 +88,8 @@ class EngineShortcutsTest {
         CableCheck quick = new CableCheck(feeder, cable, 1500, 12000, MarginRequirement.seconds(0.1), null, false);
         CableCheck scanned = new CableCheck(feeder, cable, 1500, 12000, MarginRequirement.seconds(0.1), null, true);
         assertThat(quick.steadySegments(), equalTo(3));
+        // the inverse stretch, 6 to 12 times pickup: its steepness 0.02 / (1 - 6^-0.02) = 0.57 is far below 2
+        assertThat(quick.shapedSegments(), equalTo(1));
         assertThat(quick.result(), equalTo(scanned.result()));
     }
 }
