@@ -184,9 +184,23 @@ public record InverseTimeStage(
         if (highCurrent == HighCurrentBehaviour.HOLD_AT_UPPER_MULTIPLE && m > upperMultiple) {
             m = upperMultiple;
         }
+        return atMultiple(m);
+    }
+
+    private double atMultiple(double m) {
         // expm1 keeps (M^p - 1) accurate for small p and M close to 1
         double denominator = Math.expm1(exponent * Math.log(m));
         return multiplier * (aSeconds / denominator + bSeconds);
+    }
+
+    /** @return whether the stage holds its time at a current, above its upper multiple */
+    boolean heldAt(double amps) {
+        return highCurrent == HighCurrentBehaviour.HOLD_AT_UPPER_MULTIPLE && amps / pickupAmps > upperMultiple;
+    }
+
+    /** @return the held time, {@link #seconds} wherever {@link #heldAt} is true, to the last bit */
+    double heldSeconds() {
+        return atMultiple(upperMultiple);
     }
 
     /**
@@ -221,8 +235,10 @@ public record InverseTimeStage(
         if (tolerance.pickupFraction() > 0) {
             s = s.withPickupAmps(tolerance.pickupAmps(pickupAmps, edge));
         }
-        return tolerance.timeFraction() > 0 || tolerance.timeMinSeconds() > 0 ? new TolerancedInverse(s, tolerance, edge)
-                : s;
+        if (tolerance.timeFraction() > 0 || tolerance.timeMinSeconds() > 0) {
+            return new TolerancedInverse(s, tolerance, edge);
+        }
+        return s.highCurrent == HighCurrentBehaviour.HOLD_AT_UPPER_MULTIPLE ? new HeldInverse(s) : s;
     }
 
     /**

@@ -17,15 +17,19 @@ final class TolerancedInverse implements Invertible {
     private final RelayTolerance tolerance;
     private final Edge edge;
 
+    private final double heldSeconds;
+
     TolerancedInverse(InverseTimeStage base, RelayTolerance tolerance, Edge edge) {
         this.base = base;
         this.tolerance = tolerance;
         this.edge = edge;
+        this.heldSeconds = tolerance.seconds(base.heldSeconds(), edge);
     }
 
     @Override
     public double seconds(double amps) {
-        return tolerance.seconds(base.seconds(amps), edge);
+        // the held time is the same at every current above the upper multiple: computed once
+        return base.heldAt(amps) ? heldSeconds : tolerance.seconds(base.seconds(amps), edge);
     }
 
     /**

@@ -30,6 +30,31 @@ class RelayEdgesTest {
     }
 
 
+    /** An edge that computes its held time once gives the stage's own times, to the last bit. */
+    @Test
+    void aHeldEdgeGivesTheStagesOwnTimes() {
+        java.util.SplittableRandom r = new java.util.SplittableRandom(12);
+        for (int n = 0; n < 200; n++) {
+            InverseTimeStage s = InverseTimeStage.of(InverseTimeFamily.values()[r.nextInt(7)], r.nextDouble(50, 500),
+                    r.nextDouble(0.05, 1)).withHighCurrent(HighCurrentBehaviour.HOLD_AT_UPPER_MULTIPLE,
+                            r.nextDouble(5, 30));
+            RelayTolerance tol = r.nextBoolean() ? RelayTolerance.NONE
+                    : new RelayTolerance(r.nextDouble(0, 0.1), r.nextDouble(0, 0.05), 0);
+            for (Edge e : Edge.values()) {
+                TimeCurrentCurve edge = s.edge(e, tol);
+                for (int k = 0; k < 50; k++) {
+                    double amps = s.pickupAmps() * Math.exp(r.nextDouble(-0.5, 5));
+                    double expected = tol.seconds(s.seconds(amps), e);
+                    assertThat(edge + " at " + amps, Double.doubleToRawLongBits(edge.seconds(amps)),
+                            is(Double.doubleToRawLongBits(expected)));
+                }
+                // exactly at the upper multiple the stage still follows its equation
+                double at = s.pickupAmps() * s.upperMultiple();
+                assertThat(edge.seconds(at), is(tol.seconds(s.seconds(at), e)));
+            }
+        }
+    }
+
     /** Only the all-zero tolerance is none, as the record's equality with NONE said. */
     @Test
     void onlyTheZeroToleranceIsNone() {
