@@ -22,11 +22,15 @@ public final class Checks {
      * @throws IllegalArgumentException if the value is not finite or not above zero
      */
     public static double positive(String subject, double value, String unit) {
-        if (!(value > 0) || !Double.isFinite(value)) {
+        if (!isPositive(value)) {
             throw new IllegalArgumentException(
                     subject + ": found " + format(value) + unitSuffix(unit) + " - must be a finite number above 0");
         }
         return value;
+    }
+
+    private static boolean isPositive(double value) {
+        return value > 0 && Double.isFinite(value);
     }
 
     /**
@@ -90,8 +94,13 @@ public final class Checks {
      * @throws IllegalArgumentException if an end is not positive or the range is inverted
      */
     public static void currentRange(String subject, double fromAmps, double toAmps) {
-        positive(subject + ": lowest current", fromAmps, "A");
-        positive(subject + ": highest current", toAmps, "A");
+        // the messages are built only for a failure: a check runs this on every call
+        if (!isPositive(fromAmps)) {
+            positive(subject + ": lowest current", fromAmps, "A");
+        }
+        if (!isPositive(toAmps)) {
+            positive(subject + ": highest current", toAmps, "A");
+        }
         if (toAmps < fromAmps) {
             throw new IllegalArgumentException(subject + ": highest current " + format(toAmps)
                     + " A is below the lowest " + format(fromAmps) + " A - must be at or above it");
