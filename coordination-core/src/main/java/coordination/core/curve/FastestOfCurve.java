@@ -14,6 +14,7 @@ public final class FastestOfCurve implements TimeCurrentCurve {
 
     private final TimeCurrentCurve[] stages;
     private final String label;
+    private final double[] breakpoints;
 
     /**
      * Combines stages.
@@ -36,6 +37,7 @@ public final class FastestOfCurve implements TimeCurrentCurve {
         }
         this.stages = stages.toArray(new TimeCurrentCurve[0]);
         this.label = label;
+        this.breakpoints = breakpointsOf(this.stages);
     }
 
     @Override
@@ -59,16 +61,21 @@ public final class FastestOfCurve implements TimeCurrentCurve {
 
     @Override
     public double[] breakpointsAmps() {
+        return breakpoints.clone();
+    }
+
+    // the stages do not change: a check asks for the breakpoints every time, and they are found once
+    private static double[] breakpointsOf(TimeCurrentCurve[] stages) {
         double[][] parts = new double[stages.length + 1][];
         for (int i = 0; i < stages.length; i++) {
             parts[i] = stages[i].breakpointsAmps();
         }
-        parts[stages.length] = handovers();
+        parts[stages.length] = handovers(stages);
         return Curves.union(parts);
     }
 
     // where an inverse stage becomes faster than a definite-time stage the minimum has a kink
-    private double[] handovers() {
+    private static double[] handovers(TimeCurrentCurve[] stages) {
         double[] found = new double[stages.length * stages.length];
         int n = 0;
         for (TimeCurrentCurve a : stages) {

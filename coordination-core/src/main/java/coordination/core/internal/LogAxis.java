@@ -79,11 +79,23 @@ public final class LogAxis {
      */
     public static double[] scanPoints(double xa, double xb) {
         double[] xs = new double[SCAN_POINTS];
-        int last = xs.length - 1;
-        for (int i = 0; i <= last; i++) {
-            xs[i] = i == last ? xb : xa + (xb - xa) * i / last;
+        for (int i = 0; i < SCAN_POINTS; i++) {
+            xs[i] = scanPoint(xa, xb, i);
         }
         return xs;
+    }
+
+    /**
+     * One scan abscissa of a segment, as {@link #scanPoints} gives it.
+     *
+     * @param xa left end
+     * @param xb right end
+     * @param i index, from 0 to {@code SCAN_POINTS - 1}
+     * @return the point
+     */
+    public static double scanPoint(double xa, double xb, int i) {
+        int last = SCAN_POINTS - 1;
+        return i == last ? xb : xa + (xb - xa) * i / last;
     }
 
     /**
@@ -165,7 +177,18 @@ public final class LogAxis {
      */
     public static double inwardProbe(double[] xs, int end) {
         int inner = end == 0 ? 1 : end - 1;
-        return xs[end] + (xs[inner] - xs[end]) * 1e-6;
+        return inwardProbe(xs[end], xs[inner]);
+    }
+
+    /**
+     * The probe just inside a scan's end, from the end and its neighbour.
+     *
+     * @param end the end's x
+     * @param inner the neighbouring scan point's x
+     * @return the probe's x
+     */
+    public static double inwardProbe(double end, double inner) {
+        return end + (inner - end) * 1e-6;
     }
 
     /**

@@ -101,15 +101,15 @@ public final class SmoothScan {
      *     and the caller should scan the segment
      */
     public LogAxis.Point[] falling(SegmentWalk.Segment s, double[] atStart, double[] atEnd) {
-        double[] xs = LogAxis.scanPoints(s.xa(), s.xb());
-        int last = xs.length - 1;
-        double probe = LogAxis.inwardProbe(xs, last);
+        int last = LogAxis.SCAN_POINTS - 1;
+        double xb = LogAxis.scanPoint(s.xa(), s.xb(), last);
+        double probe = LogAxis.inwardProbe(xb, LogAxis.scanPoint(s.xa(), s.xb(), last - 1));
         LogAxis.Point[] minima = new LogAxis.Point[minimised];
         for (int f = 0; f < minimised; f++) {
             if (functions[f].applyAsDouble(probe) < atEnd[f]) {
                 return null;
             }
-            minima[f] = new LogAxis.Point(xs[last], atEnd[f]);
+            minima[f] = new LogAxis.Point(xb, atEnd[f]);
         }
         if (!s.first() && !Double.isNaN(previous) && crosses(previous, atStart[crossing])) {
             addCrossing(s.a());

@@ -58,6 +58,8 @@ public final class CableCheck {
     private int steadySegments;
     private int shapedSegments;
     private final CurveMemory memory;
+    // the functions' values at a segment's ends, reused from segment to segment
+    private final double[][] endValues = new double[2][2];
     private final CableCheckResult result;
 
     /**
@@ -297,8 +299,8 @@ public final class CableCheck {
         if (!(step >= MIN_STEADY_STEP)) {
             return null;
         }
-        double[] atStart = new double[2];
-        double[] atEnd = new double[2];
+        double[] atStart = endValues[0];
+        double[] atEnd = endValues[1];
         double ta = sampleDevice(seg.xa(), atStart);
         double tb = sampleDevice(seg.xb(), atEnd);
         if (!(ta > 0) || !Double.isFinite(ta) || !(tb > 0) || !Double.isFinite(tb)) {

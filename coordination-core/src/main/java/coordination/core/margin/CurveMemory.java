@@ -1,7 +1,6 @@
 package coordination.core.margin;
 
 import coordination.core.curve.TimeCurrentCurve;
-import java.util.Arrays;
 
 /**
  * A curve's times at the currents a check has already asked for. A check asks again at the same
@@ -24,7 +23,6 @@ final class CurveMemory {
      */
     CurveMemory(TimeCurrentCurve curve) {
         this.curve = curve;
-        Arrays.fill(amps, Double.NaN);
     }
 
     /**
@@ -36,7 +34,8 @@ final class CurveMemory {
     double seconds(double current) {
         long bits = Double.doubleToRawLongBits(current);
         int slot = (int) ((bits * 0x9E3779B97F4A7C15L) >>> (64 - BITS));
-        if (amps[slot] == current) {
+        // an empty slot holds 0 A, a current no check asks for; if one did, it is computed afresh
+        if (amps[slot] == current && current != 0.0) {
             return seconds[slot];
         }
         double t = of(curve, current);
