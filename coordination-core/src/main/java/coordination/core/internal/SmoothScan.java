@@ -119,6 +119,39 @@ public final class SmoothScan {
     }
 
     /**
+     * Takes a segment on which the caller has shown that every function has the same value at
+     * every scan point, and that the crossing function is not zero there. The scan of such a
+     * segment finds each minimum at the lower end, has no root, and asks only whether each function
+     * falls when moving inwards from either end; this asks the same with the same probes, so the
+     * result is the scan's to the last bit without the points in between.
+     *
+     * @param s the segment
+     * @param atStart the functions' values at its lower end, as the sampler gives them
+     * @param atEnd the functions' values at its upper end, the same
+     * @return the minima as {@link #scan} gives them, or null where a probe finds a lower value,
+     *     and the caller should scan the segment
+     */
+    public LogAxis.Point[] flat(SegmentWalk.Segment s, double[] atStart, double[] atEnd) {
+        int last = LogAxis.SCAN_POINTS - 1;
+        double xa = LogAxis.scanPoint(s.xa(), s.xb(), 0);
+        double xb = LogAxis.scanPoint(s.xa(), s.xb(), last);
+        double probeA = LogAxis.inwardProbe(xa, LogAxis.scanPoint(s.xa(), s.xb(), 1));
+        double probeB = LogAxis.inwardProbe(xb, LogAxis.scanPoint(s.xa(), s.xb(), last - 1));
+        LogAxis.Point[] minima = new LogAxis.Point[minimised];
+        for (int f = 0; f < minimised; f++) {
+            if (functions[f].applyAsDouble(probeA) < atStart[f] || functions[f].applyAsDouble(probeB) < atEnd[f]) {
+                return null;
+            }
+            minima[f] = new LogAxis.Point(xa, atStart[f]);
+        }
+        if (!s.first() && !Double.isNaN(previous) && crosses(previous, atStart[crossing])) {
+            addCrossing(s.a());
+        }
+        previous = atEnd[crossing];
+        return minima;
+    }
+
+    /**
      * Sets what the crossing function is taken to be at the end of a segment that was not scanned:
      * NaN where nothing is known (a curve without value), an infinity of the sign the check chooses
      * where a device does not operate.

@@ -28,6 +28,9 @@ import java.util.function.DoubleUnaryOperator;
  * each segment as the interval is.
  */
 public final class GradingCheck {
+    /** Narrowest scan step, in ln(I), on which two flat curves' segment is taken from its ends. */
+    private static final double MIN_FLAT_STEP = 1e-6;
+
     private final ProtectiveDevice upstream;
     private final ProtectiveDevice downstream;
     private final TimeCurrentCurve up;
@@ -36,6 +39,10 @@ public final class GradingCheck {
     private final double fromAmps;
     private final double toAmps;
     private final GradingRequirement requirement;
+    private final boolean plain;
+    // the functions' values at a segment's ends, reused from segment to segment
+    private final double[][] endValues = new double[2][2];
+    private int flatSegments;
     private final GradingCheckResult result;
 
     /**
@@ -50,6 +57,15 @@ public final class GradingCheck {
      */
     public GradingCheck(ProtectiveDevice upstream, ProtectiveDevice downstream, double fromAmps, double toAmps,
             GradingRequirement requirement) {
+        this(upstream, downstream, fromAmps, toAmps, requirement, false);
+    }
+
+    /**
+     * As the public constructor; with {@code plain} every segment is scanned: the reference the
+     * tests hold the shortcut to.
+     */
+    GradingCheck(ProtectiveDevice upstream, ProtectiveDevice downstream, double fromAmps, double toAmps,
+            GradingRequirement requirement, boolean plain) {
         Checks.given("grading check: upstream device", upstream);
         Checks.given("grading check: downstream device", downstream);
         Checks.given("grading check: requirement", requirement);
@@ -69,6 +85,7 @@ public final class GradingCheck {
         this.fromAmps = fromAmps;
         this.toAmps = toAmps;
         this.requirement = requirement;
+        this.plain = plain;
         this.result = compute();
     }
 
@@ -90,6 +107,11 @@ public final class GradingCheck {
     /** @return the result */
     public GradingCheckResult result() {
         return result;
+    }
+
+    /** @return how many segments were taken from their ends without a scan, for tests */
+    int flatSegments() {
+        return flatSegments;
     }
 
     private static double time(TimeCurrentCurve c, double amps) {
@@ -151,7 +173,9 @@ public final class GradingCheck {
         SegmentWalk.walk(splitPoints(), s -> {
             double mid = s.midAmps();
             double right = s.rightAmps();
-            if (Double.isNaN(time(up, mid)) || Double.isNaN(time(down, mid))) {
+            double upMid = time(up, mid);
+            double downMid = time(down, mid);
+            if (Double.isNaN(upMid) || Double.isNaN(downMid)) {
                 scan.interrupt(Double.NaN);
                 // the energies' own ends are split points: defined in the middle is defined throughout
                 if (energyDefined(mid)) {
@@ -162,8 +186,10 @@ public final class GradingCheck {
                 }
                 return;
             }
-            boolean upOperates = Double.isFinite(time(up, right));
-            boolean downOperates = Double.isFinite(time(down, right));
+            double upRight = time(up, right);
+            double downRight = time(down, right);
+            boolean upOperates = Double.isFinite(upRight);
+            boolean downOperates = Double.isFinite(downRight);
             if (!upOperates) {
                 scan.interrupt(downOperates ? Double.POSITIVE_INFINITY : Double.NaN);
                 return;
@@ -181,7 +207,10 @@ public final class GradingCheck {
                 interval.unbounded(s.a(), s.first());
                 seg = s.from(Math.min(s.xb(), s.xa() + LogAxis.DIVERGENCE_PROBE));
             }
-            interval.offer(scan.scan(seg)[0], seg);
+            // flat curves have the same time in the middle as at the end: only then are the ends asked
+            boolean flatCandidate = upMid == upRight && downMid == downRight;
+            LogAxis.Point[] minima = flatCandidate ? flatSegment(scan, seg) : null;
+            interval.offer((minima != null ? minima : scan.scan(seg))[0], seg);
         });
         Optional<Fuse> fu = fuse(upstream);
         Optional<Fuse> fd = fuse(downstream);
@@ -211,6 +240,41 @@ public final class GradingCheck {
             return Optional.of(f);
         }
         return d instanceof BandDevice b && b.source() instanceof Fuse f ? Optional.of(f) : Optional.empty();
+    }
+
+    /**
+     * A segment on which both curves have the same time at both ends, and so, since no curve's
+     * computed time rises with current, the same time at every current between: the interval and
+     * the log ratio are the same at every scan point, and the scan's answer is known from the ends
+     * (see {@link SmoothScan#flat}). Returns null, for the scan to decide, where a time is not
+     * finite, the curves meet, or the segment is so narrow that a falling time could round to the
+     * same value at both ends.
+     */
+    private LogAxis.Point[] flatSegment(SmoothScan scan, SegmentWalk.Segment seg) {
+        // on a narrower segment a falling time could round to equal values at both ends
+        if (plain || !((seg.xb() - seg.xa()) / (LogAxis.SCAN_POINTS - 1) >= MIN_FLAT_STEP)) {
+            return null;
+        }
+        double[] atStart = endValues[0];
+        double[] atEnd = endValues[1];
+        double ampsA = Math.exp(seg.xa());
+        double ampsB = Math.exp(seg.xb());
+        double tuA = time(up, ampsA);
+        double tdA = time(down, ampsA);
+        boolean flat = tuA == time(up, ampsB) && tdA == time(down, ampsB);
+        if (!flat || !Double.isFinite(tuA) || !Double.isFinite(tdA)) {
+            return null;
+        }
+        sample(seg.xa(), atStart);
+        sample(seg.xb(), atEnd);
+        if (!(atStart[1] != 0) || Double.isNaN(atStart[1])) {
+            return null;
+        }
+        LogAxis.Point[] minima = scan.flat(seg, atStart, atEnd);
+        if (minima != null) {
+            flatSegments++;
+        }
+        return minima;
     }
 
     private void sample(double x, double[] values) {
