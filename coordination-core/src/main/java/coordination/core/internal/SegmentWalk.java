@@ -70,13 +70,17 @@ public final class SegmentWalk {
      */
     public static void walk(double[] points, Visitor visitor) {
         int segments = Math.max(1, points.length - 1);
+        // each point's logarithm once: it is the upper end of one segment and the lower of the next
+        double logB = Math.log(points[0]);
         for (int i = 0; i < segments; i++) {
             double a = points[i];
             double b = points.length == 1 ? a : points[i + 1];
             boolean first = i == 0;
             boolean last = i == segments - 1;
-            double xa = Math.log(a) + (first ? 0.0 : SIDE_OFFSET);
-            double xb = Math.max(xa, Math.log(b) - (last ? 0.0 : SIDE_OFFSET));
+            double logA = logB;
+            logB = points.length == 1 ? logA : Math.log(b);
+            double xa = logA + (first ? 0.0 : SIDE_OFFSET);
+            double xb = Math.max(xa, logB - (last ? 0.0 : SIDE_OFFSET));
             visitor.visit(new Segment(a, b, xa, xb, first, last));
         }
     }
