@@ -38,6 +38,10 @@ import java.util.function.DoubleUnaryOperator;
 public final class CableCheck {
     private static final double[] WINDOW_EDGES_SECONDS = {CableThermalLimit.ADIABATIC_MIN_SECONDS,
         CableThermalLimit.ADIABATIC_MAX_SECONDS};
+    private static final double[] LOG_WINDOW_EDGES = {Math.log(CableThermalLimit.ADIABATIC_MIN_SECONDS),
+        Math.log(CableThermalLimit.ADIABATIC_MAX_SECONDS)};
+    /** Relative distance from a window edge beyond which no rounding puts a time on its other side. */
+    private static final double EDGE_CLEARANCE = 1e-9;
 
     /** Narrowest scan step, in ln(I), on which a steady device's segment is taken from its ends. */
     private static final double MIN_STEADY_STEP = 1e-6;
@@ -79,8 +83,9 @@ public final class CableCheck {
     }
 
     /**
-     * As the public constructor; with {@code plain} every segment is scanned and every curve time
-     * computed afresh: the reference the tests hold the shortcuts to.
+     * As the public constructor; with {@code plain} every segment is scanned, every curve time
+     * computed afresh and every segment searched for a window edge: the reference the tests hold
+     * the shortcuts to.
      */
     CableCheck(ProtectiveDevice device, CableThermalLimit cable, double fromAmps, double toAmps,
             MarginRequirement requirement, DcOffset dcOffset, boolean plain) {
@@ -389,6 +394,21 @@ public final class CableCheck {
         }
     }
 
+    /**
+     * Whether both times lie on the same side of each window edge by far more than the rounding of
+     * their logarithms, so that the root search would find no edge between them.
+     */
+    private static boolean clearOfWindowEdges(double tA, double tB) {
+        for (double limit : WINDOW_EDGES_SECONDS) {
+            boolean above = tA > limit * (1 + EDGE_CLEARANCE) && tB > limit * (1 + EDGE_CLEARANCE);
+            boolean below = tA < limit * (1 - EDGE_CLEARANCE) && tB < limit * (1 - EDGE_CLEARANCE);
+            if (!above && !below) {
+                return false;
+            }
+        }
+        return true;
+    }
+
     private double logCurveSeconds(double x) {
         double amps = Math.exp(x);
         return Math.log(remembered(amps));
@@ -408,10 +428,14 @@ public final class CableCheck {
                 return;
             }
             // the clearing time never rises with current, so each limit is passed at most once per segment
-            double logA = logCurveSeconds(s.xa());
-            double logB = logCurveSeconds(s.xb());
-            for (double limit : WINDOW_EDGES_SECONDS) {
-                double logLimit = Math.log(limit);
+            double tA = remembered(Math.exp(s.xa()));
+            double tB = remembered(Math.exp(s.xb()));
+            if (!plain && clearOfWindowEdges(tA, tB)) {
+                return;
+            }
+            double logA = Math.log(tA);
+            double logB = Math.log(tB);
+            for (double logLimit : LOG_WINDOW_EDGES) {
                 double r = LogAxis.monotoneRoot(x -> logCurveSeconds(x) - logLimit, s.xa(), s.xb(), logA - logLimit,
                         logB - logLimit);
                 if (!Double.isNaN(r)) {
