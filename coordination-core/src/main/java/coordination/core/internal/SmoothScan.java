@@ -32,12 +32,14 @@ public final class SmoothScan {
     private double[] crossings = new double[4];
     private int crossingCount;
     private double previous = Double.NaN;
+    private double[] probeBuffer;
 
     /**
      * Creates a scan.
      *
      * @param sampler evaluates all functions at once, from one evaluation of each curve
-     * @param functions the same functions one at a time, for the solvers
+     * @param functions the same functions one at a time, for the solvers, each giving the
+     *     sampler's value to the last bit
      * @param minimised how many functions, from index 0, are minimised
      * @param crossing index of the function whose sign changes are crossings
      * @param fromAmps lower end of the range in amperes; roots at the ends are not crossings
@@ -104,9 +106,11 @@ public final class SmoothScan {
         int last = LogAxis.SCAN_POINTS - 1;
         double xb = LogAxis.scanPoint(s.xa(), s.xb(), last);
         double probe = LogAxis.inwardProbe(xb, LogAxis.scanPoint(s.xa(), s.xb(), last - 1));
+        double[] atProbe = probeValues();
+        sampler.sample(probe, atProbe);
         LogAxis.Point[] minima = new LogAxis.Point[minimised];
         for (int f = 0; f < minimised; f++) {
-            if (functions[f].applyAsDouble(probe) < atEnd[f]) {
+            if (atProbe[f] < atEnd[f]) {
                 return null;
             }
             minima[f] = new LogAxis.Point(xb, atEnd[f]);
@@ -178,6 +182,14 @@ public final class SmoothScan {
             }
         }
         return n == v.length ? v : Arrays.copyOf(v, n);
+    }
+
+    // the functions' values at a probe, reused from segment to segment
+    private double[] probeValues() {
+        if (probeBuffer == null) {
+            probeBuffer = new double[functions.length];
+        }
+        return probeBuffer;
     }
 
     private void addCrossing(double amps) {

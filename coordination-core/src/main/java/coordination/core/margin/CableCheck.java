@@ -274,7 +274,10 @@ public final class CableCheck {
 
     /** Fills the margin and the log ratio at x and returns the device's equivalent time there. */
     private double sampleDevice(double x, double[] values) {
-        double amps = Math.exp(x);
+        return sampleDeviceAt(Math.exp(x), values);
+    }
+
+    private double sampleDeviceAt(double amps, double[] values) {
         double te = equivalentSeconds(amps, remembered(amps));
         double tc = cableSeconds(amps);
         values[0] = tc - te;
@@ -306,8 +309,10 @@ public final class CableCheck {
         }
         double[] atStart = endValues[0];
         double[] atEnd = endValues[1];
-        double ta = sampleDevice(seg.xa(), atStart);
-        double tb = sampleDevice(seg.xb(), atEnd);
+        double ampsA = Math.exp(seg.xa());
+        double ampsB = Math.exp(seg.xb());
+        double ta = sampleDeviceAt(ampsA, atStart);
+        double tb = sampleDeviceAt(ampsB, atEnd);
         if (!(ta > 0) || !Double.isFinite(ta) || !(tb > 0) || !Double.isFinite(tb)) {
             return null;
         }
@@ -315,8 +320,6 @@ public final class CableCheck {
         if (!oneSign || !Double.isFinite(atStart[1]) || !Double.isFinite(atEnd[1])) {
             return null;
         }
-        double ampsA = Math.exp(seg.xa());
-        double ampsB = Math.exp(seg.xb());
         // the curve's own times equal too, not only the DC-offset equivalents made of them
         boolean steady = ta == tb && remembered(ampsA) == remembered(ampsB);
         double slope;
