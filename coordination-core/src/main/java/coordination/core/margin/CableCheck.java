@@ -60,6 +60,8 @@ public final class CableCheck {
     private final double adiabaticI2t;
     private final boolean plain;
     private int steadySegments;
+    // the edge search's segments, walked again by the check where the search added no split point
+    private SegmentWalk.Segment[] searchedSegments;
     private int shapedSegments;
     private final CurveMemory memory;
     // the functions' values at a segment's ends, reused from segment to segment
@@ -228,7 +230,7 @@ public final class CableCheck {
         List<ThermalRegion> regions = new ArrayList<>();
         SmoothScan scan = new SmoothScan(this::sampleDevice, new DoubleUnaryOperator[] {this::margin, this::logRatio},
                 2, 1, fromAmps, toAmps);
-        SegmentWalk.walk(splitPoints(), s -> {
+        walkSegments(s -> {
             double tMid = deviceSeconds(s.midAmps(), remembered(s.midAmps()));
             double tRight = deviceSeconds(s.rightAmps(), remembered(s.rightAmps()));
             if (Double.isNaN(tMid) || Double.isNaN(tRight)) {
@@ -417,6 +419,18 @@ public final class CableCheck {
         return Math.log(remembered(amps));
     }
 
+    /** Visits the segments between the split points, the edge search's own where no edge was found. */
+    private void walkSegments(SegmentWalk.Visitor visitor) {
+        double[] points = splitPoints();
+        if (searchedSegments == null) {
+            SegmentWalk.walk(points, visitor);
+            return;
+        }
+        for (SegmentWalk.Segment s : searchedSegments) {
+            visitor.visit(s);
+        }
+    }
+
     /** The range ends, the device's and the cable's breakpoints inside, the let-through's, and the window edges. */
     private double[] splitPoints() {
         double[] energy = letThrough == null ? new double[0] : letThrough.breakpointsAmps();
@@ -425,8 +439,10 @@ public final class CableCheck {
                 cable.breakpointsAmps());
         // window edges: where the clearing time passes 0.1 s and 5 s inside a smooth segment
         double[] edges = new double[2 * base.length];
-        int[] m = {0};
+        SegmentWalk.Segment[] searched = new SegmentWalk.Segment[Math.max(1, base.length - 1)];
+        int[] m = {0, 0};
         SegmentWalk.walk(base, s -> {
+            searched[m[1]++] = s;
             if (!(s.xb() > s.xa()) || Double.isNaN(remembered(s.midAmps()))) {
                 return;
             }
@@ -446,6 +462,11 @@ public final class CableCheck {
                 }
             }
         });
+        if (m[0] == 0 && !plain) {
+            // no edge inside: the split points are the base ones, and so are the segments
+            searchedSegments = searched;
+            return base;
+        }
         return LogAxis.splitPoints(fromAmps, toAmps, base, Arrays.copyOf(edges, m[0]));
     }
 }
