@@ -231,8 +231,10 @@ public final class CableCheck {
         SmoothScan scan = new SmoothScan(this::sampleDevice, new DoubleUnaryOperator[] {this::margin, this::logRatio},
                 2, 1, fromAmps, toAmps);
         walkSegments(s -> {
-            double tMid = deviceSeconds(s.midAmps(), remembered(s.midAmps()));
-            double tRight = deviceSeconds(s.rightAmps(), remembered(s.rightAmps()));
+            double mid = s.midAmps();
+            double right = s.rightAmps();
+            double tMid = deviceSeconds(mid, remembered(mid));
+            double tRight = deviceSeconds(right, remembered(right));
             if (Double.isNaN(tMid) || Double.isNaN(tRight)) {
                 undefined.add(s.a(), s.b());
                 addRegion(regions, s.a(), s.b(), ThermalRegion.UNDEFINED);
@@ -245,7 +247,7 @@ public final class CableCheck {
                 scan.interrupt(Double.NEGATIVE_INFINITY);
                 return;
             }
-            addRegion(regions, s.a(), s.b(), method(s.midAmps(), tMid));
+            addRegion(regions, s.a(), s.b(), method(mid, tMid));
             SegmentWalk.Segment seg = s;
             // a pole can only sit where the device starts to operate: at the range start or after a gap
             boolean afterGap = s.first() || scan.previous() == Double.NEGATIVE_INFINITY;
