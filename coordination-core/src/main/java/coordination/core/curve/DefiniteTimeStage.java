@@ -90,6 +90,12 @@ public record DefiniteTimeStage(double pickupAmps, double delaySeconds, double f
         return fromAmps >= pickupAmps || toAmps < pickupAmps ? 0.0 : Double.POSITIVE_INFINITY;
     }
 
+    /** Flat where it operates; it operates nowhere below its pickup. */
+    @Override
+    public double logSlopeFloor(double fromAmps, double toAmps) {
+        return toAmps < pickupAmps ? Double.POSITIVE_INFINITY : 0.0;
+    }
+
     @Override
     public TimeCurrentCurve edge(Edge edge, RelayTolerance tolerance) {
         double pickup = tolerance.pickupAmps(pickupAmps, edge);

@@ -59,6 +59,16 @@ public final class FastestOfCurve implements TimeCurrentCurve {
         return bound;
     }
 
+    /** Whichever stage is fastest falls at least as steeply as the least steep of those that operate. */
+    @Override
+    public double logSlopeFloor(double fromAmps, double toAmps) {
+        double floor = Double.POSITIVE_INFINITY;
+        for (TimeCurrentCurve s : stages) {
+            floor = Math.min(floor, s.logSlopeFloor(fromAmps, toAmps));
+        }
+        return floor;
+    }
+
     @Override
     public double[] breakpointsAmps() {
         return breakpoints.clone();

@@ -35,6 +35,11 @@ final class HeldInverse implements Invertible {
     }
 
     @Override
+    public double logSlopeFloor(double fromAmps, double toAmps) {
+        return base.logSlopeFloor(fromAmps, toAmps);
+    }
+
+    @Override
     public double[] breakpointsAmps() {
         return base.breakpointsAmps();
     }

@@ -225,6 +225,25 @@ public record InverseTimeStage(
         return (1 + SLOPE_WIDENING) * exponent / -Math.expm1(-exponent * Math.log(m));
     }
 
+    /**
+     * The steepness {@code p M^p A / ((M^p - 1)(A + B (M^p - 1)))} at the stretch's highest
+     * multiple M, where it is least: both factors fall as M rises. A stretch that reaches a held
+     * region, or starts at or below the pickup, has no floor; one below the pickup operates nowhere.
+     */
+    @Override
+    public double logSlopeFloor(double fromAmps, double toAmps) {
+        if (toAmps <= pickupAmps) {
+            return Double.POSITIVE_INFINITY;
+        }
+        double m = toAmps / pickupAmps;
+        if (fromAmps <= pickupAmps || highCurrent == HighCurrentBehaviour.HOLD_AT_UPPER_MULTIPLE && m > upperMultiple) {
+            return 0.0;
+        }
+        double d = Math.expm1(exponent * Math.log(m));
+        // narrowed by far more than the rounding of its own evaluation
+        return (1 - SLOPE_WIDENING) * exponent * (d + 1) / d * (aSeconds / (aSeconds + bSeconds * d));
+    }
+
     @Override
     public TimeCurrentCurve edge(Edge edge, RelayTolerance tolerance) {
         InverseTimeStage s = this;

@@ -41,6 +41,12 @@ final class ScaledCurve implements TimeCurrentCurve {
         return base.logSlopeBound(fromAmps / factor, toAmps / factor);
     }
 
+    /** An added time makes a curve flatter, by an amount this does not compute: no floor then. */
+    @Override
+    public double logSlopeFloor(double fromAmps, double toAmps) {
+        return addedSeconds == 0.0 ? base.logSlopeFloor(fromAmps / factor, toAmps / factor) : 0.0;
+    }
+
     // amps / factor may round just outside the base's interval at its very ends
     private double clampToBase(double baseAmps) {
         return Math.min(Math.max(baseAmps, base.lowestDefinedAmps()), base.highestDefinedAmps());

@@ -72,6 +72,21 @@ public interface TimeCurrentCurve extends Serializable {
     }
 
     /**
+     * A floor under how steeply the curve falls between two currents with no breakpoint between
+     * them: for any two currents I1 &lt; I2 in {@code [fromAmps, toAmps]} at which the curve
+     * operates, {@code ln t(I1) - ln t(I2)} is at least the floor times {@code ln I2 - ln I1}. The
+     * grading check uses it to show that an interval falls throughout a segment. A curve that
+     * states no floor returns 0; one that operates nowhere on the stretch may return infinity.
+     *
+     * @param fromAmps lower current in amperes, above 0
+     * @param toAmps upper current in amperes, at or above {@code fromAmps}
+     * @return the floor, 0 or more
+     */
+    default double logSlopeFloor(double fromAmps, double toAmps) {
+        return 0.0;
+    }
+
+    /**
      * Whether {@link #seconds(double)} has a value at a current.
      *
      * @param amps current in amperes

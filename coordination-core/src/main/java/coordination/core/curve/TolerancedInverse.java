@@ -41,6 +41,16 @@ final class TolerancedInverse implements Invertible {
         return edge == Edge.SLOW ? base.logSlopeBound(fromAmps, toAmps) : Double.POSITIVE_INFINITY;
     }
 
+    /**
+     * Without a fixed time the edges are {@code t (1 + e)} and {@code t (1 - e)}, as steep as t;
+     * a fixed time makes the slow edge flatter, by an amount this does not compute.
+     */
+    @Override
+    public double logSlopeFloor(double fromAmps, double toAmps) {
+        return tolerance.timeMinSeconds() == 0 && tolerance.timeFraction() < 1 ? base.logSlopeFloor(fromAmps, toAmps)
+                : 0.0;
+    }
+
     @Override
     public double currentAtSeconds(double seconds) {
         double e = tolerance.timeFraction();

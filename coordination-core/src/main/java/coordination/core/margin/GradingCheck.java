@@ -28,8 +28,10 @@ import java.util.function.DoubleUnaryOperator;
  * each segment as the interval is.
  */
 public final class GradingCheck {
-    /** Narrowest scan step, in ln(I), on which two flat curves' segment is taken from its ends. */
+    /** Narrowest scan step, in ln(I), on which a segment is taken from its ends. */
     private static final double MIN_FLAT_STEP = 1e-6;
+    /** Fall per scan step, relative to the values' size, that no rounding of them can undo. */
+    private static final double STRICT_FALL = 1e-12;
 
     private final ProtectiveDevice upstream;
     private final ProtectiveDevice downstream;
@@ -43,6 +45,7 @@ public final class GradingCheck {
     // the functions' values at a segment's ends, reused from segment to segment
     private final double[][] endValues = new double[2][2];
     private int flatSegments;
+    private int fallingSegments;
     private final GradingCheckResult result;
 
     /**
@@ -109,9 +112,14 @@ public final class GradingCheck {
         return result;
     }
 
-    /** @return how many segments were taken from their ends without a scan, for tests */
+    /** @return how many segments of two flat curves were taken from their ends, for tests */
     int flatSegments() {
         return flatSegments;
+    }
+
+    /** @return how many segments were taken from their ends by the upstream curve's slope floor, for tests */
+    int fallingSegments() {
+        return fallingSegments;
     }
 
     private static double time(TimeCurrentCurve c, double amps) {
@@ -208,8 +216,13 @@ public final class GradingCheck {
                 seg = s.from(Math.min(s.xb(), s.xa() + LogAxis.DIVERGENCE_PROBE));
             }
             // flat curves have the same time in the middle as at the end: only then are the ends asked
-            boolean flatCandidate = upMid == upRight && downMid == downRight;
-            LogAxis.Point[] minima = flatCandidate ? flatSegment(scan, seg) : null;
+            boolean downFlat = downMid == downRight;
+            LogAxis.Point[] minima = null;
+            if (downFlat && upMid == upRight) {
+                minima = flatSegment(scan, seg);
+            } else if (downFlat) {
+                minima = fallingSegment(scan, seg);
+            }
             interval.offer((minima != null ? minima : scan.scan(seg))[0], seg);
         });
         Optional<Fuse> fu = fuse(upstream);
@@ -273,6 +286,50 @@ public final class GradingCheck {
         LogAxis.Point[] minima = scan.flat(seg, atStart, atEnd);
         if (minima != null) {
             flatSegments++;
+        }
+        return minima;
+    }
+
+    /**
+     * A segment on which the downstream time is flat and the upstream one falls at least as steeply
+     * as its curve's {@link TimeCurrentCurve#logSlopeFloor} f: over a step Δ in ln I the upstream
+     * time falls by at least {@code f Δ} times its value at the segment's end, so the interval falls
+     * at every scan step and the log ratio keeps the sign its ends share. The scan's answer is then
+     * the upper end (see {@link SmoothScan#falling}). Returns null, for the scan to decide, where
+     * that fall is not far above rounding, a time is not finite, or the curves meet.
+     */
+    private LogAxis.Point[] fallingSegment(SmoothScan scan, SegmentWalk.Segment seg) {
+        double step = (seg.xb() - seg.xa()) / (LogAxis.SCAN_POINTS - 1);
+        if (plain || !(step >= MIN_FLAT_STEP)) {
+            return null;
+        }
+        double ampsA = Math.exp(seg.xa());
+        double ampsB = Math.exp(seg.xb());
+        double tdA = time(down, ampsA);
+        if (tdA != time(down, ampsB) || !(tdA >= 0) || !Double.isFinite(tdA)) {
+            return null;
+        }
+        double tuA = time(up, ampsA);
+        double tuB = time(up, ampsB);
+        if (!(tuB > 0) || !Double.isFinite(tuA)) {
+            return null;
+        }
+        double floor = up.logSlopeFloor(ampsA, ampsB);
+        // each step's fall, far above the rounding of values of the size met on the segment
+        if (!(floor > 0) || !Double.isFinite(floor) || !(tuB * floor * step > STRICT_FALL * Math.max(tuA, tdA))) {
+            return null;
+        }
+        double[] atStart = endValues[0];
+        double[] atEnd = endValues[1];
+        sample(seg.xa(), atStart);
+        sample(seg.xb(), atEnd);
+        boolean oneSign = atStart[1] > 0 && atEnd[1] > 0 || atStart[1] < 0 && atEnd[1] < 0;
+        if (!oneSign) {
+            return null;
+        }
+        LogAxis.Point[] minima = scan.falling(seg, atStart, atEnd);
+        if (minima != null) {
+            fallingSegments++;
         }
         return minima;
     }

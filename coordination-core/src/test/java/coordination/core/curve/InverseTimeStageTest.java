@@ -125,4 +125,19 @@ class InverseTimeStageTest {
         InverseTimeStage held = stage.withHighCurrent(HighCurrentBehaviour.HOLD_AT_UPPER_MULTIPLE, 20);
         assertThat(held.logSlopeBound(2000, 5000), is(0.0));
     }
+
+    @ParameterizedTest(name = "IEEE very inverse up to M = {0}")
+    @org.junit.jupiter.params.provider.ValueSource(doubles = {1.5, 4, 15})
+    void theSlopeFloorIsTheEquationsSteepnessAtTheStretchsEnd(double m) {
+        // IEEE C37.112: t = TD (A / (M^p - 1) + B), A = 19.61 s, B = 0.491 s, p = 2;
+        // d ln t / d ln I = -p M^p A / ((M^p - 1)(A + B (M^p - 1))), least steep at the highest M
+        InverseTimeStage stage = InverseTimeStage.of(InverseTimeFamily.IEEE_VERY_INVERSE, 100, 2);
+        double d = m * m - 1;
+        double exact = 2 * m * m * 19.61 / (d * (19.61 + 0.491 * d));
+        assertThat(stage.logSlopeFloor(100 * m / 1.2, 100 * m), closeTo(exact, exact * 1e-8));
+        double h = 1e-5;
+        double numeric = (Math.log(stage.seconds(100 * m * Math.exp(-h))) - Math.log(stage.seconds(100 * m * Math.exp(h))))
+                / (2 * h);
+        assertThat(numeric, closeTo(exact, exact * 1e-6));
+    }
 }

@@ -88,7 +88,7 @@ abstract class TimeCurrentCurveContractTest {
     }
 
     @Test
-    void noStretchIsSteeperThanItsStatedBound() {
+    void everyStretchFallsBetweenItsStatedFloorAndBound() {
         SplittableRandom r = new SplittableRandom(46);
         for (int c = 0; c < CASES; c++) {
             ProtectiveDevice d = device(r);
@@ -104,8 +104,13 @@ abstract class TimeCurrentCurveContractTest {
                         continue;
                     }
                     double bound = curve.logSlopeBound(a, b);
+                    double floor = curve.logSlopeFloor(a, b);
                     assertThat(curve + " on " + a + " to " + b + " A", bound, greaterThanOrEqualTo(0.0));
-                    if (Double.isInfinite(bound)) {
+                    assertThat(curve + " on " + a + " to " + b + " A", floor, greaterThanOrEqualTo(0.0));
+                    if (Double.isInfinite(floor)) {
+                        // a curve that says it operates nowhere on the stretch
+                        assertThat(curve.seconds(a), is(Double.POSITIVE_INFINITY));
+                        assertThat(curve.seconds(b), is(Double.POSITIVE_INFINITY));
                         continue;
                     }
                     double previous = curve.seconds(a);
@@ -117,8 +122,11 @@ abstract class TimeCurrentCurveContractTest {
                                 Double.isInfinite(t), is(Double.isInfinite(previous)));
                         if (Double.isFinite(t)) {
                             // 1e-12 covers the rounding of the two logarithms, far below any slope's share
-                            assertThat(curve + " at " + Math.exp(x1) + " A", Math.log(previous) - Math.log(t),
+                            double fall = previous == t ? 0.0 : Math.log(previous) - Math.log(t);
+                            assertThat(curve + " at " + Math.exp(x1) + " A", fall,
                                     lessThanOrEqualTo(bound * (x1 - x0) + 1e-12));
+                            assertThat(curve + " at " + Math.exp(x1) + " A", fall,
+                                    greaterThanOrEqualTo(floor * (x1 - x0) - 1e-12));
                         }
                         previous = t;
                     }

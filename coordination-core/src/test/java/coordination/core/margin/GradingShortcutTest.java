@@ -17,8 +17,9 @@ import org.junit.jupiter.params.ParameterizedTest;
 import org.junit.jupiter.params.provider.ValueSource;
 
 /**
- * The grading check's shortcut: where both curves are flat on a segment it takes the segment's
- * minimum from its ends instead of scanning it. The answer must be the plain check's to the last
+ * The grading check's shortcuts: where both curves are flat on a segment, or the downstream one
+ * is flat and the upstream one provably falls, it takes the segment's minimum from its ends
+ * instead of scanning it. The answer must be the plain check's to the last
  * bit: every result is compared with {@code equals} against the same check with every segment
  * scanned.
  */
@@ -34,6 +35,7 @@ class GradingShortcutTest {
     void aFlatSegmentGivesTheScansAnswer(long seed) {
         SplittableRandom r = new SplittableRandom(seed);
         int flat = 0;
+        int falling = 0;
         for (int n = 0; n < CASES_PER_SEED; n++) {
             ProtectiveDevice up = r.nextBoolean() ? RandomDevices.relay(r) : RandomDevices.any(r);
             ProtectiveDevice down = r.nextBoolean() ? RandomDevices.relay(r) : RandomDevices.any(r);
@@ -43,11 +45,13 @@ class GradingShortcutTest {
             GradingCheck quick = new GradingCheck(up, down, lo, hi, req, false);
             GradingCheck scanned = new GradingCheck(up, down, lo, hi, req, true);
             assertThat("seed " + seed + " pair " + n, quick.result(), equalTo(scanned.result()));
-            assertThat(scanned.flatSegments(), equalTo(0));
+            assertThat(scanned.flatSegments() + scanned.fallingSegments(), equalTo(0));
             flat += quick.flatSegments();
+            falling += quick.fallingSegments();
         }
         // the comparison means something only if the shortcut was taken often
         assertThat("flat segments taken from their ends", flat, greaterThan(CASES_PER_SEED / 8));
+        assertThat("segments taken from their ends by the slope floor", falling, greaterThan(CASES_PER_SEED / 8));
     }
 
     @Test
@@ -62,6 +66,8 @@ class GradingShortcutTest {
         GradingCheck quick = new GradingCheck(incomer, feeder, 1500, 12000, req, false);
         GradingCheck scanned = new GradingCheck(incomer, feeder, 1500, 12000, req, true);
         assertThat(quick.flatSegments(), equalTo(2));
+        // from 3 kA to 8 kA the feeder is flat and the incomer's inverse stage falls: 0.02 M^0.02 / (M^0.02 - 1) > 0.5
+        assertThat(quick.fallingSegments(), equalTo(2));
         assertThat(quick.result(), equalTo(scanned.result()));
     }
 }
