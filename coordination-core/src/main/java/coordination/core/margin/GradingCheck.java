@@ -216,13 +216,8 @@ public final class GradingCheck {
                 seg = s.from(Math.min(s.xb(), s.xa() + LogAxis.DIVERGENCE_PROBE));
             }
             // flat curves have the same time in the middle as at the end: only then are the ends asked
-            boolean downFlat = downMid == downRight;
-            LogAxis.Point[] minima = null;
-            if (downFlat && upMid == upRight) {
-                minima = flatSegment(scan, seg);
-            } else if (downFlat) {
-                minima = fallingSegment(scan, seg);
-            }
+            LogAxis.Point[] minima = upMid == upRight && downMid == downRight ? flatSegment(scan, seg)
+                    : fallingSegment(scan, seg);
             interval.offer((minima != null ? minima : scan.scan(seg))[0], seg);
         });
         Optional<Fuse> fu = fuse(upstream);
@@ -291,12 +286,15 @@ public final class GradingCheck {
     }
 
     /**
-     * A segment on which the downstream time is flat and the upstream one falls at least as steeply
-     * as its curve's {@link TimeCurrentCurve#logSlopeFloor} f: over a step Δ in ln I the upstream
-     * time falls by at least {@code f Δ} times its value at the segment's end, so the interval falls
-     * at every scan step and the log ratio keeps the sign its ends share. The scan's answer is then
-     * the upper end (see {@link SmoothScan#falling}). Returns null, for the scan to decide, where
-     * that fall is not far above rounding, a time is not finite, or the curves meet.
+     * A segment on which the upstream time provably falls faster than the downstream one can: over
+     * a step Δ in ln I the upstream time falls by at least {@code f Δ} times its value at the
+     * segment's end, f its curve's {@link TimeCurrentCurve#logSlopeFloor}, and the downstream time
+     * by at most {@code s Δ} times its value at the start, s its curve's
+     * {@link TimeCurrentCurve#logSlopeBound} (0 where it is flat). Where {@code f tu(end) > s td(start)}
+     * the interval falls at every scan step, and the log ratio, of the interval's sign, keeps the
+     * sign its ends share. The scan's answer is then the upper end (see
+     * {@link SmoothScan#falling}). Returns null, for the scan to decide, where that fall is not far
+     * above rounding, a time is not finite, or the curves meet.
      */
     private LogAxis.Point[] fallingSegment(SmoothScan scan, SegmentWalk.Segment seg) {
         double step = (seg.xb() - seg.xa()) / (LogAxis.SCAN_POINTS - 1);
@@ -306,17 +304,18 @@ public final class GradingCheck {
         double ampsA = Math.exp(seg.xa());
         double ampsB = Math.exp(seg.xb());
         double tdA = time(down, ampsA);
-        if (tdA != time(down, ampsB) || !(tdA >= 0) || !Double.isFinite(tdA)) {
-            return null;
-        }
         double tuA = time(up, ampsA);
         double tuB = time(up, ampsB);
-        if (!(tuB > 0) || !Double.isFinite(tuA)) {
+        if (!(tdA >= 0) || !Double.isFinite(tdA) || !(tuB > 0) || !Double.isFinite(tuA)) {
             return null;
         }
         double floor = up.logSlopeFloor(ampsA, ampsB);
+        if (!(floor > 0) || !Double.isFinite(floor)) {
+            return null;
+        }
+        double bound = tdA == time(down, ampsB) ? 0.0 : down.logSlopeBound(ampsA, ampsB);
         // each step's fall, far above the rounding of values of the size met on the segment
-        if (!(floor > 0) || !Double.isFinite(floor) || !(tuB * floor * step > STRICT_FALL * Math.max(tuA, tdA))) {
+        if (!((floor * tuB - bound * tdA) * step > STRICT_FALL * Math.max(tuA, tdA))) {
             return null;
         }
         double[] atStart = endValues[0];
