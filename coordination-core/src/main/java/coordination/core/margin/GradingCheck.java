@@ -216,8 +216,12 @@ public final class GradingCheck {
                 seg = s.from(Math.min(s.xb(), s.xa() + LogAxis.DIVERGENCE_PROBE));
             }
             // flat curves have the same time in the middle as at the end: only then are the ends asked
-            LogAxis.Point[] minima = upMid == upRight && downMid == downRight ? flatSegment(scan, seg)
-                    : fallingSegment(scan, seg);
+            // the times at the segment's upper end, where its current is the one just asked
+            boolean atRight = right == Math.exp(seg.xb());
+            double upB = atRight ? upRight : time(up, Math.exp(seg.xb()));
+            double downB = atRight ? downRight : time(down, Math.exp(seg.xb()));
+            LogAxis.Point[] minima = upMid == upRight && downMid == downRight ? flatSegment(scan, seg, upB, downB)
+                    : fallingSegment(scan, seg, upB, downB);
             interval.offer((minima != null ? minima : scan.scan(seg))[0], seg);
         });
         Optional<Fuse> fu = fuse(upstream);
@@ -258,7 +262,7 @@ public final class GradingCheck {
      * finite, the curves meet, or the segment is so narrow that a falling time could round to the
      * same value at both ends.
      */
-    private LogAxis.Point[] flatSegment(SmoothScan scan, SegmentWalk.Segment seg) {
+    private LogAxis.Point[] flatSegment(SmoothScan scan, SegmentWalk.Segment seg, double tuB, double tdB) {
         // on a narrower segment a falling time could round to equal values at both ends
         if (plain || !((seg.xb() - seg.xa()) / (LogAxis.SCAN_POINTS - 1) >= MIN_FLAT_STEP)) {
             return null;
@@ -266,15 +270,14 @@ public final class GradingCheck {
         double[] atStart = endValues[0];
         double[] atEnd = endValues[1];
         double ampsA = Math.exp(seg.xa());
-        double ampsB = Math.exp(seg.xb());
         double tuA = time(up, ampsA);
         double tdA = time(down, ampsA);
-        boolean flat = tuA == time(up, ampsB) && tdA == time(down, ampsB);
+        boolean flat = tuA == tuB && tdA == tdB;
         if (!flat || !Double.isFinite(tuA) || !Double.isFinite(tdA)) {
             return null;
         }
-        sample(seg.xa(), atStart);
-        sample(seg.xb(), atEnd);
+        fill(atStart, tuA, tdA);
+        fill(atEnd, tuB, tdB);
         if (!(atStart[1] != 0) || Double.isNaN(atStart[1])) {
             return null;
         }
@@ -296,32 +299,31 @@ public final class GradingCheck {
      * {@link SmoothScan#falling}). Returns null, for the scan to decide, where that fall is not far
      * above rounding, a time is not finite, or the curves meet.
      */
-    private LogAxis.Point[] fallingSegment(SmoothScan scan, SegmentWalk.Segment seg) {
+    private LogAxis.Point[] fallingSegment(SmoothScan scan, SegmentWalk.Segment seg, double tuB, double tdB) {
         double step = (seg.xb() - seg.xa()) / (LogAxis.SCAN_POINTS - 1);
-        if (plain || !(step >= MIN_FLAT_STEP)) {
+        if (plain || !(step >= MIN_FLAT_STEP) || !(tuB > 0)) {
             return null;
         }
         double ampsA = Math.exp(seg.xa());
         double ampsB = Math.exp(seg.xb());
         double tdA = time(down, ampsA);
         double tuA = time(up, ampsA);
-        double tuB = time(up, ampsB);
-        if (!(tdA >= 0) || !Double.isFinite(tdA) || !(tuB > 0) || !Double.isFinite(tuA)) {
+        if (!(tdA >= 0) || !Double.isFinite(tdA) || !Double.isFinite(tuA)) {
             return null;
         }
         double floor = up.logSlopeFloor(ampsA, ampsB);
         if (!(floor > 0) || !Double.isFinite(floor)) {
             return null;
         }
-        double bound = tdA == time(down, ampsB) ? 0.0 : down.logSlopeBound(ampsA, ampsB);
+        double bound = tdA == tdB ? 0.0 : down.logSlopeBound(ampsA, ampsB);
         // each step's fall, far above the rounding of values of the size met on the segment
         if (!((floor * tuB - bound * tdA) * step > STRICT_FALL * Math.max(tuA, tdA))) {
             return null;
         }
         double[] atStart = endValues[0];
         double[] atEnd = endValues[1];
-        sample(seg.xa(), atStart);
-        sample(seg.xb(), atEnd);
+        fill(atStart, tuA, tdA);
+        fill(atEnd, tuB, tdB);
         boolean oneSign = atStart[1] > 0 && atEnd[1] > 0 || atStart[1] < 0 && atEnd[1] < 0;
         if (!oneSign) {
             return null;
@@ -335,8 +337,11 @@ public final class GradingCheck {
 
     private void sample(double x, double[] values) {
         double amps = Math.exp(x);
-        double tu = time(up, amps);
-        double td = time(down, amps);
+        fill(values, time(up, amps), time(down, amps));
+    }
+
+    // the interval and the log ratio from the two times, as the scan samples them
+    private static void fill(double[] values, double tu, double td) {
         values[0] = tu - td;
         values[1] = Math.log(tu) - Math.log(td);
     }
