@@ -181,9 +181,7 @@ public final class GradingCheck {
         SegmentWalk.walk(splitPoints(), s -> {
             double mid = s.midAmps();
             double right = s.rightAmps();
-            double upMid = time(up, mid);
-            double downMid = time(down, mid);
-            if (Double.isNaN(upMid) || Double.isNaN(downMid)) {
+            if (!up.isDefinedAt(mid) || !down.isDefinedAt(mid)) {
                 scan.interrupt(Double.NaN);
                 // the energies' own ends are split points: defined in the middle is defined throughout
                 if (energyDefined(mid)) {
@@ -215,13 +213,15 @@ public final class GradingCheck {
                 interval.unbounded(s.a(), s.first());
                 seg = s.from(Math.min(s.xb(), s.xa() + LogAxis.DIVERGENCE_PROBE));
             }
-            // flat curves have the same time in the middle as at the end: only then are the ends asked
-            // the times at the segment's upper end, where its current is the one just asked
+            // the times at the segment's ends, the upper end's from the walk where its current is the same
             boolean atRight = right == Math.exp(seg.xb());
             double upB = atRight ? upRight : time(up, Math.exp(seg.xb()));
             double downB = atRight ? downRight : time(down, Math.exp(seg.xb()));
-            LogAxis.Point[] minima = upMid == upRight && downMid == downRight ? flatSegment(scan, seg, upB, downB)
-                    : fallingSegment(scan, seg, upB, downB);
+            double ampsA = Math.exp(seg.xa());
+            double upA = time(up, ampsA);
+            double downA = time(down, ampsA);
+            LogAxis.Point[] minima = upA == upB && downA == downB ? flatSegment(scan, seg, upA, downA, upB, downB)
+                    : fallingSegment(scan, seg, upA, downA, upB, downB);
             interval.offer((minima != null ? minima : scan.scan(seg))[0], seg);
         });
         Optional<Fuse> fu = fuse(upstream);
@@ -262,16 +262,14 @@ public final class GradingCheck {
      * finite, the curves meet, or the segment is so narrow that a falling time could round to the
      * same value at both ends.
      */
-    private LogAxis.Point[] flatSegment(SmoothScan scan, SegmentWalk.Segment seg, double tuB, double tdB) {
+    private LogAxis.Point[] flatSegment(SmoothScan scan, SegmentWalk.Segment seg, double tuA, double tdA, double tuB,
+            double tdB) {
         // on a narrower segment a falling time could round to equal values at both ends
         if (plain || !((seg.xb() - seg.xa()) / (LogAxis.SCAN_POINTS - 1) >= MIN_FLAT_STEP)) {
             return null;
         }
         double[] atStart = endValues[0];
         double[] atEnd = endValues[1];
-        double ampsA = Math.exp(seg.xa());
-        double tuA = time(up, ampsA);
-        double tdA = time(down, ampsA);
         boolean flat = tuA == tuB && tdA == tdB;
         if (!flat || !Double.isFinite(tuA) || !Double.isFinite(tdA)) {
             return null;
@@ -299,15 +297,14 @@ public final class GradingCheck {
      * {@link SmoothScan#falling}). Returns null, for the scan to decide, where that fall is not far
      * above rounding, a time is not finite, or the curves meet.
      */
-    private LogAxis.Point[] fallingSegment(SmoothScan scan, SegmentWalk.Segment seg, double tuB, double tdB) {
+    private LogAxis.Point[] fallingSegment(SmoothScan scan, SegmentWalk.Segment seg, double tuA, double tdA, double tuB,
+            double tdB) {
         double step = (seg.xb() - seg.xa()) / (LogAxis.SCAN_POINTS - 1);
         if (plain || !(step >= MIN_FLAT_STEP) || !(tuB > 0)) {
             return null;
         }
         double ampsA = Math.exp(seg.xa());
         double ampsB = Math.exp(seg.xb());
-        double tdA = time(down, ampsA);
-        double tuA = time(up, ampsA);
         if (!(tdA >= 0) || !Double.isFinite(tdA) || !Double.isFinite(tuA)) {
             return null;
         }
