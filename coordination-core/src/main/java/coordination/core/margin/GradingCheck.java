@@ -28,8 +28,8 @@ import java.util.function.DoubleUnaryOperator;
  * each segment as the interval is.
  */
 public final class GradingCheck {
-    /** Narrowest scan step, in ln(I), on which a segment is taken from its ends. */
-    private static final double MIN_FLAT_STEP = 1e-6;
+    /** Narrowest scan step, in ln(I), on which a segment is taken from its ends without a scan. */
+    private static final double MIN_STEP = 1e-6;
     /** Fall per scan step, relative to the values' size, that no rounding of them can undo. */
     private static final double STRICT_FALL = 1e-12;
 
@@ -117,7 +117,7 @@ public final class GradingCheck {
         return flatSegments;
     }
 
-    /** @return how many segments were taken from their ends by the upstream curve's slope floor, for tests */
+    /** @return how many segments were taken from their ends by the curves' slope floor and bound, for tests */
     int fallingSegments() {
         return fallingSegments;
     }
@@ -255,25 +255,24 @@ public final class GradingCheck {
     }
 
     /**
-     * A segment on which both curves have the same time at both ends, and so, since no curve's
-     * computed time rises with current, the same time at every current between: the interval and
-     * the log ratio are the same at every scan point, and the scan's answer is known from the ends
-     * (see {@link SmoothScan#flat}). Returns null, for the scan to decide, where a time is not
+     * A segment on which both curves have the same time at both ends (the caller compares them),
+     * and so, since no curve's computed time rises with current, the same time at every current
+     * between: the interval and the log ratio are the same at every scan point, and the scan's
+     * answer is known from the ends (see {@link SmoothScan#flat}). Returns null, for the scan to decide, where a time is not
      * finite, the curves meet, or the segment is so narrow that a falling time could round to the
      * same value at both ends.
      */
     private LogAxis.Point[] flatSegment(SmoothScan scan, SegmentWalk.Segment seg, double tuA, double tdA, double tuB,
             double tdB) {
         // on a narrower segment a falling time could round to equal values at both ends
-        if (plain || !((seg.xb() - seg.xa()) / (LogAxis.SCAN_POINTS - 1) >= MIN_FLAT_STEP)) {
+        if (plain || !((seg.xb() - seg.xa()) / (LogAxis.SCAN_POINTS - 1) >= MIN_STEP)) {
+            return null;
+        }
+        if (!Double.isFinite(tuA) || !Double.isFinite(tdA)) {
             return null;
         }
         double[] atStart = endValues[0];
         double[] atEnd = endValues[1];
-        boolean flat = tuA == tuB && tdA == tdB;
-        if (!flat || !Double.isFinite(tuA) || !Double.isFinite(tdA)) {
-            return null;
-        }
         fill(atStart, tuA, tdA);
         fill(atEnd, tuB, tdB);
         if (!(atStart[1] != 0) || Double.isNaN(atStart[1])) {
@@ -300,7 +299,7 @@ public final class GradingCheck {
     private LogAxis.Point[] fallingSegment(SmoothScan scan, SegmentWalk.Segment seg, double tuA, double tdA, double tuB,
             double tdB) {
         double step = (seg.xb() - seg.xa()) / (LogAxis.SCAN_POINTS - 1);
-        if (plain || !(step >= MIN_FLAT_STEP) || !(tuB > 0)) {
+        if (plain || !(step >= MIN_STEP) || !(tuB > 0)) {
             return null;
         }
         double ampsA = Math.exp(seg.xa());
