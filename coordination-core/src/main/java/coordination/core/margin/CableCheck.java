@@ -60,9 +60,9 @@ public final class CableCheck {
     private final double adiabaticI2t;
     private final boolean plain;
     private int steadySegments;
+    private int shapedSegments;
     // the edge search's segments, walked again by the check where the search added no split point
     private SegmentWalk.Segment[] searchedSegments;
-    private int shapedSegments;
     private final CurveMemory memory;
     // the functions' values at a segment's ends, reused from segment to segment
     private final double[][] endValues = new double[2][2];
@@ -433,7 +433,11 @@ public final class CableCheck {
         }
     }
 
-    /** The range ends, the device's and the cable's breakpoints inside, the let-through's, and the window edges. */
+    /**
+     * The range ends, the device's and the cable's breakpoints inside, the let-through's, and the
+     * window edges. Where no window edge lies inside a segment, the search's segments are kept in
+     * {@link #searchedSegments} for the check's own walk.
+     */
     private double[] splitPoints() {
         double[] energy = letThrough == null ? new double[0] : letThrough.breakpointsAmps();
         double[] base = LogAxis.splitPoints(fromAmps, toAmps, curve.breakpointsAmps(),
