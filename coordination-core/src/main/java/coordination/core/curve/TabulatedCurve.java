@@ -19,6 +19,8 @@ public final class TabulatedCurve implements TimeCurrentCurve {
     private final double[] seconds;
     private final double[] logAmps;
     private final double[] logSeconds;
+    /** Relative margin of the stated slopes, far above the rounding of the interpolation. */
+    private static final double SLOPE_MARGIN = 1e-9;
 
     /**
      * Creates the curve.
@@ -138,6 +140,41 @@ public final class TabulatedCurve implements TimeCurrentCurve {
             }
         }
         return amps[n - 1];
+    }
+
+    /** The steepest of the straight log-log pieces the stretch touches; none is stated outside the points. */
+    @Override
+    public double logSlopeBound(double fromAmps, double toAmps) {
+        return pieceSlope(fromAmps, toAmps, true);
+    }
+
+    /** The least steep of the straight log-log pieces the stretch touches; none is stated outside the points. */
+    @Override
+    public double logSlopeFloor(double fromAmps, double toAmps) {
+        return pieceSlope(fromAmps, toAmps, false);
+    }
+
+    private double pieceSlope(double fromAmps, double toAmps, boolean steepest) {
+        int n = amps.length;
+        if (!(fromAmps >= amps[0] && toAmps <= amps[n - 1] && toAmps >= fromAmps)) {
+            return steepest ? Double.POSITIVE_INFINITY : 0.0;
+        }
+        // the pieces from the one holding fromAmps to the one holding toAmps
+        int first = Math.min(n - 2, pieceAt(fromAmps));
+        int last = Math.max(first, Math.min(n - 2, pieceAt(toAmps) - (toAmps == amps[pieceAt(toAmps)] ? 1 : 0)));
+        double slope = steepest ? 0.0 : Double.POSITIVE_INFINITY;
+        for (int k = first; k <= last; k++) {
+            double piece = (logSeconds[k] - logSeconds[k + 1]) / (logAmps[k + 1] - logAmps[k]);
+            slope = steepest ? Math.max(slope, piece) : Math.min(slope, piece);
+        }
+        // widened (or narrowed) by far more than the rounding of the interpolation
+        return slope * (steepest ? 1 + SLOPE_MARGIN : 1 - SLOPE_MARGIN);
+    }
+
+    // the index k of the point at or below a current: amps[k] <= a, within the points
+    private int pieceAt(double a) {
+        int i = Arrays.binarySearch(amps, a);
+        return i >= 0 ? i : -i - 2;
     }
 
     @Override
