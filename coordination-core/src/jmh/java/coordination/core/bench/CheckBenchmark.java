@@ -4,9 +4,11 @@ import coordination.core.cable.CableThermalLimit;
 import coordination.core.cable.ConductorMaterial;
 import coordination.core.cable.Insulation;
 import coordination.core.curve.DefiniteTimeStage;
+import coordination.core.curve.Fuse;
 import coordination.core.curve.InverseTimeFamily;
 import coordination.core.curve.InverseTimeStage;
 import coordination.core.curve.Relay;
+import coordination.core.curve.TabulatedCurve;
 import coordination.core.curve.TimeCurrentCurve;
 import coordination.core.margin.CableCheck;
 import coordination.core.margin.CableCheckResult;
@@ -15,6 +17,7 @@ import coordination.core.margin.GradingCheckResult;
 import coordination.core.margin.GradingRequirement;
 import coordination.core.margin.MarginRequirement;
 import java.util.List;
+import java.util.Optional;
 import java.util.concurrent.TimeUnit;
 import org.openjdk.jmh.annotations.Benchmark;
 import org.openjdk.jmh.annotations.BenchmarkMode;
@@ -23,7 +26,7 @@ import org.openjdk.jmh.annotations.OutputTimeUnit;
 import org.openjdk.jmh.annotations.Scope;
 import org.openjdk.jmh.annotations.State;
 
-/** One cable check and one grading check, and a 10,000-point sampling check for comparison. */
+/** One cable check and grading checks of relays and of fuses, and a 10,000-point sampling check for comparison. */
 @State(Scope.Benchmark)
 @BenchmarkMode(Mode.Throughput)
 @OutputTimeUnit(TimeUnit.SECONDS)
@@ -35,6 +38,17 @@ public class CheckBenchmark {
     private final Relay incomer = new Relay("F0", List.of(
             InverseTimeStage.of(InverseTimeFamily.IEC_STANDARD_INVERSE, 600, 0.3),
             DefiniteTimeStage.definiteTime(8000, 0.5)), 1, 0.05);
+
+    // fuses digitised from points of our own, the same shape at two ratings (no maker's data)
+    private final Fuse upstreamFuse = fuse("F400", 400);
+    private final Fuse downstreamFuse = fuse("F160", 160);
+
+    private static Fuse fuse(String id, double rating) {
+        double[] amps = {2 * rating, 3 * rating, 5 * rating, 8 * rating, 12 * rating, 20 * rating};
+        return new Fuse(id, rating, new TabulatedCurve("melting", amps, new double[] {300, 30, 3, 0.5, 0.1, 0.02}),
+                new TabulatedCurve("clearing", amps, new double[] {330, 34, 3.6, 0.65, 0.15, 0.035}), Optional.empty(),
+                Optional.empty(), Optional.empty(), Optional.empty());
+    }
 
     /** @return the exact cable check */
     @Benchmark
@@ -52,6 +66,12 @@ public class CheckBenchmark {
     @Benchmark
     public GradingCheckResult gradingCheckWide() {
         return GradingCheck.check(incomer, feeder, 1500, 12000, GradingRequirement.intervalSeconds(0.3));
+    }
+
+    /** @return the exact grading check of two fuses, each digitised from six points */
+    @Benchmark
+    public GradingCheckResult fuseGradingCheck() {
+        return GradingCheck.check(upstreamFuse, downstreamFuse, 1000, 3000, GradingRequirement.intervalSeconds(0.1));
     }
 
     /** @return the minimum margin found by sampling 10,000 log-spaced currents */
