@@ -5,6 +5,12 @@ import java.util.Arrays;
 
 /** Helpers shared by the curve implementations. */
 final class Curves {
+    /**
+     * Relative margin by which a stated slope bound is widened and a slope floor narrowed: far
+     * above the rounding of the curve's own evaluation, far below any slope the engine relies on.
+     */
+    static final double SLOPE_MARGIN = 1e-9;
+
     private Curves() {
     }
 

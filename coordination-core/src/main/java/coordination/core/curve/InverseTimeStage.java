@@ -33,9 +33,6 @@ public record InverseTimeStage(
         double upperMultiple,
         String label) implements RelayStage, Invertible {
 
-    /** Relative widening of {@link #logSlopeBound}, far above the rounding of its computation. */
-    private static final double SLOPE_WIDENING = 1e-9;
-
     /** The upper multiple of pickup that IEC 60255-151 states for the curves (common practice: 20). */
     public static final double STANDARD_UPPER_MULTIPLE = 20.0;
 
@@ -222,7 +219,7 @@ public record InverseTimeStage(
             return 0.0;
         }
         // widened by far more than the rounding of its own evaluation
-        return (1 + SLOPE_WIDENING) * exponent / -Math.expm1(-exponent * Math.log(m));
+        return (1 + Curves.SLOPE_MARGIN) * exponent / -Math.expm1(-exponent * Math.log(m));
     }
 
     /**
@@ -241,7 +238,7 @@ public record InverseTimeStage(
         }
         double d = Math.expm1(exponent * Math.log(m));
         // narrowed by far more than the rounding of its own evaluation
-        return (1 - SLOPE_WIDENING) * exponent * (d + 1) / d * (aSeconds / (aSeconds + bSeconds * d));
+        return (1 - Curves.SLOPE_MARGIN) * exponent * (d + 1) / d * (aSeconds / (aSeconds + bSeconds * d));
     }
 
     @Override

@@ -19,8 +19,6 @@ public final class TabulatedCurve implements TimeCurrentCurve {
     private final double[] seconds;
     private final double[] logAmps;
     private final double[] logSeconds;
-    /** Relative margin of the stated slopes, far above the rounding of the interpolation. */
-    private static final double SLOPE_MARGIN = 1e-9;
 
     /**
      * Creates the curve.
@@ -161,14 +159,19 @@ public final class TabulatedCurve implements TimeCurrentCurve {
         }
         // the pieces from the one holding fromAmps to the one holding toAmps
         int first = Math.min(n - 2, pieceAt(fromAmps));
-        int last = Math.max(first, Math.min(n - 2, pieceAt(toAmps) - (toAmps == amps[pieceAt(toAmps)] ? 1 : 0)));
+        int last = pieceAt(toAmps);
+        if (toAmps == amps[last]) {
+            // a stretch that ends at a point lies in the piece below it
+            last--;
+        }
+        last = Math.max(first, Math.min(n - 2, last));
         double slope = steepest ? 0.0 : Double.POSITIVE_INFINITY;
         for (int k = first; k <= last; k++) {
             double piece = (logSeconds[k] - logSeconds[k + 1]) / (logAmps[k + 1] - logAmps[k]);
             slope = steepest ? Math.max(slope, piece) : Math.min(slope, piece);
         }
-        // widened (or narrowed) by far more than the rounding of the interpolation
-        return slope * (steepest ? 1 + SLOPE_MARGIN : 1 - SLOPE_MARGIN);
+        // widened, or narrowed, by far more than the rounding of the interpolation
+        return slope * (steepest ? 1 + Curves.SLOPE_MARGIN : 1 - Curves.SLOPE_MARGIN);
     }
 
     // the index k of the point at or below a current: amps[k] <= a, within the points
