@@ -31,42 +31,6 @@ public final class LogAxis {
     public record Point(double x, double value) {
     }
 
-    /**
-     * The ends of a current range and every candidate strictly inside it, ascending, each once:
-     * the points at which a check splits its range into smooth segments.
-     *
-     * @param from lower end
-     * @param to upper end, at or above {@code from}
-     * @param candidates breakpoints, domain edges and other split points, in any order
-     * @return the split points
-     */
-    public static double[] splitPoints(double from, double to, double[]... candidates) {
-        int n = 2;
-        for (double[] c : candidates) {
-            n += c.length;
-        }
-        double[] all = new double[n];
-        int k = 0;
-        all[k++] = from;
-        all[k++] = to;
-        for (double[] c : candidates) {
-            for (double v : c) {
-                if (v > from && v < to) {
-                    all[k++] = v;
-                }
-            }
-        }
-        double[] used = Arrays.copyOf(all, k);
-        Arrays.sort(used);
-        int m = 0;
-        for (double v : used) {
-            if (m == 0 || v > used[m - 1]) {
-                used[m++] = v;
-            }
-        }
-        return Arrays.copyOf(used, m);
-    }
-
     /** Number of points a segment is scanned at, ends included. */
     public static final int SCAN_POINTS = SCAN + 2;
 

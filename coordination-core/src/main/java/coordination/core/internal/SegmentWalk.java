@@ -5,25 +5,63 @@ package coordination.core.internal;
  * smooth, its ends moved just inside the steps so that both one-sided values of a step are seen.
  * At a step the value exactly at the breakpoint belongs to the higher-current side, so a segment
  * that ends at a step stops a hair below it and the next one starts a hair above it.
+ *
+ * <p>The segments are kept in reusable arrays, so that a check walks them more than once (for
+ * the window edges, then for the margins) from one logarithm per split point, and a check run
+ * again allocates nothing.
  */
 public final class SegmentWalk {
     /** Offset in ln(I) used to take one-sided limits at a step of a curve. */
     public static final double SIDE_OFFSET = 1e-11;
 
-    private SegmentWalk() {
-    }
+    private double[] a = new double[8];
+    private double[] b = new double[8];
+    private double[] xa = new double[8];
+    private double[] xb = new double[8];
+    private int count;
 
     /**
-     * One segment between two split points.
-     *
-     * @param a lower current in amperes
-     * @param b upper current in amperes
-     * @param xa lowest ln(I) evaluated: ln(a), just above a step unless a is the range's start
-     * @param xb highest ln(I) evaluated: ln(b), just below a step unless b is the range's end
-     * @param first whether a is the lower end of the range (not a step)
-     * @param last whether b is the upper end of the range
+     * One segment between two split points: a view that a walk fills, reused from segment to
+     * segment.
      */
-    public record Segment(double a, double b, double xa, double xb, boolean first, boolean last) {
+    public static final class Segment {
+        private double a;
+        private double b;
+        private double xa;
+        private double xb;
+        private boolean first;
+        private boolean last;
+
+        /** @return lower current in amperes */
+        public double a() {
+            return a;
+        }
+
+        /** @return upper current in amperes */
+        public double b() {
+            return b;
+        }
+
+        /** @return lowest ln(I) evaluated: ln(a), just above a step unless a is the range's start */
+        public double xa() {
+            return xa;
+        }
+
+        /** @return highest ln(I) evaluated: ln(b), just below a step unless b is the range's end */
+        public double xb() {
+            return xb;
+        }
+
+        /** @return whether a is the lower end of the range (not a step) */
+        public boolean first() {
+            return first;
+        }
+
+        /** @return whether b is the upper end of the range */
+        public boolean last() {
+            return last;
+        }
+
         /** @return the current in the middle of the evaluated part, in amperes */
         public double midAmps() {
             return Math.exp(0.5 * (xa + xb));
@@ -40,48 +78,72 @@ public final class SegmentWalk {
         }
 
         /**
-         * The same segment evaluated from a later start (past a pole at its lower end).
+         * Makes this the given segment evaluated from a later start (past a pole at its lower end).
          *
-         * @param x the new lowest ln(I), at most {@code xb}
-         * @return the segment
+         * @param s the segment
+         * @param x the new lowest ln(I), at most {@code s.xb()}
+         * @return this
          */
-        public Segment from(double x) {
-            return new Segment(a, b, x, xb, first, last);
+        public Segment setFrom(Segment s, double x) {
+            a = s.a;
+            b = s.b;
+            xa = x;
+            xb = s.xb;
+            first = s.first;
+            last = s.last;
+            return this;
         }
-    }
-
-    /** Receives the segments of a walk in ascending order. */
-    @FunctionalInterface
-    public interface Visitor {
-        /**
-         * Visits a segment.
-         *
-         * @param segment the segment
-         */
-        void visit(Segment segment);
     }
 
     /**
-     * Visits every segment between consecutive split points; a range of one point is one segment
-     * of zero width.
+     * Makes the segments between consecutive split points; a range of one point is one segment of
+     * zero width.
      *
-     * @param points split points, ascending and distinct, at least one
-     * @param visitor receives the segments
+     * @param points split points, ascending and distinct
+     * @param n how many of them, at least one
      */
-    public static void walk(double[] points, Visitor visitor) {
-        int segments = Math.max(1, points.length - 1);
+    public void fill(double[] points, int n) {
+        count = Math.max(1, n - 1);
+        if (a.length < count) {
+            int size = Math.max(count, 2 * a.length);
+            a = new double[size];
+            b = new double[size];
+            xa = new double[size];
+            xb = new double[size];
+        }
         // each point's logarithm once: it is the upper end of one segment and the lower of the next
         double logB = Math.log(points[0]);
-        for (int i = 0; i < segments; i++) {
-            double a = points[i];
-            double b = points.length == 1 ? a : points[i + 1];
-            boolean first = i == 0;
-            boolean last = i == segments - 1;
+        for (int i = 0; i < count; i++) {
+            double lo = points[i];
+            double hi = n == 1 ? lo : points[i + 1];
             double logA = logB;
-            logB = points.length == 1 ? logA : Math.log(b);
-            double xa = logA + (first ? 0.0 : SIDE_OFFSET);
-            double xb = Math.max(xa, logB - (last ? 0.0 : SIDE_OFFSET));
-            visitor.visit(new Segment(a, b, xa, xb, first, last));
+            logB = n == 1 ? logA : Math.log(hi);
+            a[i] = lo;
+            b[i] = hi;
+            xa[i] = logA + (i == 0 ? 0.0 : SIDE_OFFSET);
+            xb[i] = Math.max(xa[i], logB - (i == count - 1 ? 0.0 : SIDE_OFFSET));
         }
+    }
+
+    /** @return how many segments the last {@link #fill} made */
+    public int count() {
+        return count;
+    }
+
+    /**
+     * Loads one segment into a view.
+     *
+     * @param i its index, from 0 in ascending order
+     * @param into the view
+     * @return the view
+     */
+    public Segment load(int i, Segment into) {
+        into.a = a[i];
+        into.b = b[i];
+        into.xa = xa[i];
+        into.xb = xb[i];
+        into.first = i == 0;
+        into.last = i == count - 1;
+        return into;
     }
 }

@@ -27,12 +27,18 @@ public final class SmoothScan {
     private final DoubleUnaryOperator[] functions;
     private final int minimised;
     private final int crossing;
-    private final double fromAmps;
-    private final double toAmps;
+    private double fromAmps;
+    private double toAmps;
     private double[] crossings = new double[4];
     private int crossingCount;
     private double previous = Double.NaN;
-    private double[] probeBuffer;
+    // buffers reused from segment to segment and from check to check
+    private final double[] xs = new double[LogAxis.SCAN_POINTS];
+    private final double[][] values;
+    private final double[] at;
+    private final double[] atProbe;
+    private final double[] minimumX;
+    private final double[] minimumValue;
 
     /**
      * Creates a scan.
@@ -42,29 +48,62 @@ public final class SmoothScan {
      *     sampler's value to the last bit
      * @param minimised how many functions, from index 0, are minimised
      * @param crossing index of the function whose sign changes are crossings
-     * @param fromAmps lower end of the range in amperes; roots at the ends are not crossings
-     * @param toAmps upper end of the range in amperes
      */
-    public SmoothScan(Sampler sampler, DoubleUnaryOperator[] functions, int minimised, int crossing, double fromAmps,
-            double toAmps) {
+    public SmoothScan(Sampler sampler, DoubleUnaryOperator[] functions, int minimised, int crossing) {
         this.sampler = sampler;
         this.functions = functions.clone();
         this.minimised = minimised;
         this.crossing = crossing;
-        this.fromAmps = fromAmps;
-        this.toAmps = toAmps;
+        this.values = new double[functions.length][LogAxis.SCAN_POINTS];
+        this.at = new double[functions.length];
+        this.atProbe = new double[functions.length];
+        this.minimumX = new double[minimised];
+        this.minimumValue = new double[minimised];
     }
 
     /**
-     * Scans a smooth segment.
+     * Starts a new range: no crossing found, nothing known before its start.
+     *
+     * @param fromAmps lower end of the range in amperes; roots at the ends are not crossings
+     * @param toAmps upper end of the range in amperes
+     */
+    public void reset(double fromAmps, double toAmps) {
+        this.fromAmps = fromAmps;
+        this.toAmps = toAmps;
+        crossingCount = 0;
+        previous = Double.NaN;
+    }
+
+    /**
+     * The x = ln(I) of the last segment's minimum of a minimised function.
+     *
+     * @param f the function's index
+     * @return x
+     */
+    public double minimumX(int f) {
+        return minimumX[f];
+    }
+
+    /**
+     * The last segment's minimum of a minimised function.
+     *
+     * @param f the function's index
+     * @return the value
+     */
+    public double minimumValue(int f) {
+        return minimumValue[f];
+    }
+
+    /**
+     * Scans a smooth segment; the minimum found on it of each minimised function is then given by
+     * {@link #minimumX} and {@link #minimumValue}.
      *
      * @param s the segment, with its evaluated lower end
-     * @return the minimum found on the segment of each minimised function, in index order
      */
-    public LogAxis.Point[] scan(SegmentWalk.Segment s) {
-        double[] xs = LogAxis.scanPoints(s.xa(), s.xb());
-        double[][] values = new double[functions.length][xs.length];
-        double[] at = new double[functions.length];
+    public void scan(SegmentWalk.Segment s) {
+        for (int i = 0; i < xs.length; i++) {
+            xs[i] = LogAxis.scanPoint(s.xa(), s.xb(), i);
+        }
         for (int k = 0; k < xs.length; k++) {
             sampler.sample(xs[k], at);
             for (int f = 0; f < at.length; f++) {
@@ -75,9 +114,10 @@ public final class SmoothScan {
         if (!s.first() && !Double.isNaN(previous) && crosses(previous, c[0])) {
             addCrossing(s.a());
         }
-        LogAxis.Point[] minima = new LogAxis.Point[minimised];
         for (int f = 0; f < minimised; f++) {
-            minima[f] = LogAxis.minimum(functions[f], xs, values[f]);
+            LogAxis.Point p = LogAxis.minimum(functions[f], xs, values[f]);
+            minimumX[f] = p.x();
+            minimumValue[f] = p.value();
         }
         for (double root : LogAxis.roots(functions[crossing], xs, c)) {
             double amps = Math.exp(root);
@@ -86,7 +126,6 @@ public final class SmoothScan {
             }
         }
         previous = c[c.length - 1];
-        return minima;
     }
 
     /**
@@ -99,27 +138,28 @@ public final class SmoothScan {
      * @param s the segment
      * @param atStart the functions' values at its lower end, as the sampler gives them
      * @param atEnd the functions' values at its upper end
-     * @return the minima as {@link #scan} gives them, or null where a probe finds a lower value,
-     *     and the caller should scan the segment
+     * @return whether the minima are as {@link #scan} gives them; false where a probe finds a
+     *     lower value, and the caller should scan the segment
      */
-    public LogAxis.Point[] falling(SegmentWalk.Segment s, double[] atStart, double[] atEnd) {
+    public boolean falling(SegmentWalk.Segment s, double[] atStart, double[] atEnd) {
         int last = LogAxis.SCAN_POINTS - 1;
         double xb = LogAxis.scanPoint(s.xa(), s.xb(), last);
         double probe = LogAxis.inwardProbe(xb, LogAxis.scanPoint(s.xa(), s.xb(), last - 1));
-        double[] atProbe = probeValues();
         sampler.sample(probe, atProbe);
-        LogAxis.Point[] minima = new LogAxis.Point[minimised];
         for (int f = 0; f < minimised; f++) {
             if (atProbe[f] < atEnd[f]) {
-                return null;
+                return false;
             }
-            minima[f] = new LogAxis.Point(xb, atEnd[f]);
+        }
+        for (int f = 0; f < minimised; f++) {
+            minimumX[f] = xb;
+            minimumValue[f] = atEnd[f];
         }
         if (!s.first() && !Double.isNaN(previous) && crosses(previous, atStart[crossing])) {
             addCrossing(s.a());
         }
         previous = atEnd[crossing];
-        return minima;
+        return true;
     }
 
     /**
@@ -132,27 +172,29 @@ public final class SmoothScan {
      * @param s the segment
      * @param atStart the functions' values at its lower end, as the sampler gives them
      * @param atEnd the functions' values at its upper end, the same
-     * @return the minima as {@link #scan} gives them, or null where a probe finds a lower value,
-     *     and the caller should scan the segment
+     * @return whether the minima are as {@link #scan} gives them; false where a probe finds a
+     *     lower value, and the caller should scan the segment
      */
-    public LogAxis.Point[] flat(SegmentWalk.Segment s, double[] atStart, double[] atEnd) {
+    public boolean flat(SegmentWalk.Segment s, double[] atStart, double[] atEnd) {
         int last = LogAxis.SCAN_POINTS - 1;
         double xa = LogAxis.scanPoint(s.xa(), s.xb(), 0);
         double xb = LogAxis.scanPoint(s.xa(), s.xb(), last);
         double probeA = LogAxis.inwardProbe(xa, LogAxis.scanPoint(s.xa(), s.xb(), 1));
         double probeB = LogAxis.inwardProbe(xb, LogAxis.scanPoint(s.xa(), s.xb(), last - 1));
-        LogAxis.Point[] minima = new LogAxis.Point[minimised];
         for (int f = 0; f < minimised; f++) {
             if (functions[f].applyAsDouble(probeA) < atStart[f] || functions[f].applyAsDouble(probeB) < atEnd[f]) {
-                return null;
+                return false;
             }
-            minima[f] = new LogAxis.Point(xa, atStart[f]);
+        }
+        for (int f = 0; f < minimised; f++) {
+            minimumX[f] = xa;
+            minimumValue[f] = atStart[f];
         }
         if (!s.first() && !Double.isNaN(previous) && crosses(previous, atStart[crossing])) {
             addCrossing(s.a());
         }
         previous = atEnd[crossing];
-        return minima;
+        return true;
     }
 
     /**
@@ -171,25 +213,36 @@ public final class SmoothScan {
         return previous;
     }
 
-    /** @return the crossings found so far, ascending and distinct, in amperes */
-    public double[] crossingsAmps() {
-        double[] v = Arrays.copyOf(crossings, crossingCount);
-        Arrays.sort(v);
+    /** Puts the crossings found so far in ascending order, each once; call after the last segment. */
+    public void finish() {
+        Arrays.sort(crossings, 0, crossingCount);
         int n = 0;
-        for (int k = 0; k < v.length; k++) {
-            if (n == 0 || v[k] != v[n - 1]) {
-                v[n++] = v[k];
+        for (int k = 0; k < crossingCount; k++) {
+            if (n == 0 || crossings[k] != crossings[n - 1]) {
+                crossings[n++] = crossings[k];
             }
         }
-        return n == v.length ? v : Arrays.copyOf(v, n);
+        crossingCount = n;
     }
 
-    // the functions' values at a probe, reused from segment to segment
-    private double[] probeValues() {
-        if (probeBuffer == null) {
-            probeBuffer = new double[functions.length];
-        }
-        return probeBuffer;
+    /** @return how many crossings there are, after {@link #finish} */
+    public int crossingCount() {
+        return crossingCount;
+    }
+
+    /**
+     * One crossing, after {@link #finish}.
+     *
+     * @param i its index, ascending
+     * @return amperes
+     */
+    public double crossingAmps(int i) {
+        return crossings[i];
+    }
+
+    /** @return the crossings, after {@link #finish}, ascending and distinct, in amperes (a copy) */
+    public double[] crossingsAmps() {
+        return Arrays.copyOf(crossings, crossingCount);
     }
 
     private void addCrossing(double amps) {

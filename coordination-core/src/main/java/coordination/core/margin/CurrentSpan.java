@@ -5,6 +5,12 @@ final class CurrentSpan {
     private double from = Double.NaN;
     private double to = Double.NaN;
 
+    /** Forgets every part marked, for the next check. */
+    void reset() {
+        from = Double.NaN;
+        to = Double.NaN;
+    }
+
     /**
      * Marks a part of the range.
      *

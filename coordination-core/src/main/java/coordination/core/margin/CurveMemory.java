@@ -1,18 +1,19 @@
 package coordination.core.margin;
 
 import coordination.core.curve.TimeCurrentCurve;
+import java.util.Arrays;
 
 /**
  * A curve's times at the currents a check has already asked for. A check asks again at the same
  * currents (the ends and middles of its segments, from its walks, scans and probes), and a curve's
  * time is a function of the current alone, so a remembered time is the computed one to the last
  * bit. Sixteen slots, chosen by a hash of the current; a newer current takes over a slot. One
- * check's own, on the thread that runs it.
+ * check's own, on the thread that runs it, emptied for the next.
  */
 final class CurveMemory {
     private static final int BITS = 4;
 
-    private final TimeCurrentCurve curve;
+    private TimeCurrentCurve curve;
     private final double[] amps = new double[1 << BITS];
     private final double[] seconds = new double[1 << BITS];
 
@@ -23,6 +24,16 @@ final class CurveMemory {
      */
     CurveMemory(TimeCurrentCurve curve) {
         this.curve = curve;
+    }
+
+    /**
+     * Empties the memory for another curve, or for the same one in the next check.
+     *
+     * @param newCurve the curve
+     */
+    void reset(TimeCurrentCurve newCurve) {
+        curve = newCurve;
+        Arrays.fill(amps, 0.0);
     }
 
     /**

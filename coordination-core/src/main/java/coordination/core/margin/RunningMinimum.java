@@ -1,6 +1,5 @@
 package coordination.core.margin;
 
-import coordination.core.internal.LogAxis;
 import coordination.core.internal.SegmentWalk;
 
 /**
@@ -13,31 +12,39 @@ final class RunningMinimum {
     private double at = Double.NaN;
     private Side side = Side.AT;
 
+    /** Forgets every value offered, for the next check. */
+    void reset() {
+        value = Double.NaN;
+        at = Double.NaN;
+        side = Side.AT;
+    }
+
     /**
      * Offers a segment's minimum.
      *
-     * @param p the minimum found on the segment, in x = ln(I)
+     * @param x where the minimum was found on the segment, in x = ln(I)
+     * @param v the minimum
      * @param s the segment, with the ends that were evaluated
      */
-    void offer(LogAxis.Point p, SegmentWalk.Segment s) {
+    void offer(double x, double v, SegmentWalk.Segment s) {
         double a = s.a();
         double b = s.b();
         double xa = s.xa();
         double xb = s.xb();
         boolean first = s.first();
         boolean last = s.last();
-        if (!Double.isNaN(value) && !(p.value() < value)) {
+        if (!Double.isNaN(value) && !(v < value)) {
             return;
         }
-        value = p.value();
-        if (p.x() <= xa) {
+        value = v;
+        if (x <= xa) {
             at = a;
             side = first ? Side.AT : Side.ABOVE;
-        } else if (p.x() >= xb) {
+        } else if (x >= xb) {
             at = b;
             side = last ? Side.AT : Side.BELOW;
         } else {
-            at = Math.exp(p.x());
+            at = Math.exp(x);
             side = Side.AT;
         }
     }

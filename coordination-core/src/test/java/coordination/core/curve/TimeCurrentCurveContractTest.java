@@ -95,7 +95,11 @@ abstract class TimeCurrentCurveContractTest {
             for (TimeCurrentCurve curve : new TimeCurrentCurve[] {d.minimumCurve(), d.maximumCurve()}) {
                 double lo = Math.max(curve.lowestDefinedAmps(), lowestOperatingAmps(d) * 0.5);
                 double hi = Math.min(curve.highestDefinedAmps(), lowestOperatingAmps(d) * 200);
-                double[] ends = coordination.core.internal.LogAxis.splitPoints(lo, hi, curve.breakpointsAmps());
+                coordination.core.internal.SplitPoints splits = new coordination.core.internal.SplitPoints();
+                splits.start(lo, hi);
+                splits.addAll(curve.breakpointsAmps());
+                splits.finish();
+                double[] ends = java.util.Arrays.copyOf(splits.points(), splits.count());
                 for (int k = 1; k < ends.length; k++) {
                     // the engine asks just inside the breakpoints, where the curve is smooth
                     double a = ends[k - 1] * (1 + 1e-9);

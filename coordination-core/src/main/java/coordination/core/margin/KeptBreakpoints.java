@@ -1,0 +1,38 @@
+package coordination.core.margin;
+
+import coordination.core.cable.CableThermalLimit;
+import coordination.core.curve.LetThroughEnergy;
+import coordination.core.curve.TimeCurrentCurve;
+
+/**
+ * The breakpoints of the last curve, energy or cable asked for, kept while the same one is asked
+ * for again: they do not change, and a checker run again need not copy them.
+ */
+final class KeptBreakpoints {
+    private Object source;
+    private double[] amps;
+
+    double[] of(TimeCurrentCurve c) {
+        if (c != source) {
+            source = c;
+            amps = c.breakpointsAmps();
+        }
+        return amps;
+    }
+
+    double[] of(LetThroughEnergy e) {
+        if (e != source) {
+            source = e;
+            amps = e.breakpointsAmps();
+        }
+        return amps;
+    }
+
+    double[] of(CableThermalLimit cable) {
+        if (cable != source) {
+            source = cable;
+            amps = cable.breakpointsAmps();
+        }
+        return amps;
+    }
+}
