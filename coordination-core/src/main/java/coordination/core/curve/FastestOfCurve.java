@@ -2,6 +2,7 @@ package coordination.core.curve;
 
 import coordination.core.internal.Checks;
 import java.io.Serial;
+import java.util.Arrays;
 import java.util.List;
 
 /**
@@ -12,9 +13,17 @@ public final class FastestOfCurve implements TimeCurrentCurve {
     @Serial
     private static final long serialVersionUID = 1L;
 
+    /**
+     * Relative margin by which a stage's time must lie below every other's for it to be taken as
+     * the fastest throughout a stretch: far above the rounding of a stage's own evaluation.
+     */
+    private static final double DOMINANCE_MARGIN = 1e-9;
+
     private final TimeCurrentCurve[] stages;
     private final String label;
     private final double[] breakpoints;
+    // the stage that is fastest throughout each stretch between breakpoints, -1 where none provably is
+    private final transient int[] fastest;
 
     /**
      * Combines stages.
@@ -37,11 +46,44 @@ public final class FastestOfCurve implements TimeCurrentCurve {
         }
         this.stages = stages.toArray(new TimeCurrentCurve[0]);
         this.label = label;
-        this.breakpoints = breakpointsOf(this.stages);
+        double[] all = breakpointsOf(this.stages);
+        int[] fastestAll = fastestStages(this.stages, all);
+        // a stage's kink where another stage is the fastest on both sides is no kink of the curve
+        double[] kept = new double[all.length];
+        int[] keptFastest = new int[all.length + 1];
+        keptFastest[0] = fastestAll[0];
+        int n = 0;
+        for (int k = 0; k < all.length; k++) {
+            int left = keptFastest[n];
+            if (left >= 0 && left == fastestAll[k + 1] && !isBreakpointOf(this.stages[left], all[k])) {
+                continue;
+            }
+            kept[n++] = all[k];
+            keptFastest[n] = fastestAll[k + 1];
+        }
+        this.breakpoints = Arrays.copyOf(kept, n);
+        this.fastest = Arrays.copyOf(keptFastest, n + 1);
+    }
+
+    private static boolean isBreakpointOf(TimeCurrentCurve stage, double amps) {
+        for (double b : stage.breakpointsAmps()) {
+            if (b == amps) {
+                return true;
+            }
+        }
+        return false;
     }
 
     @Override
     public double seconds(double amps) {
+        int k = 0;
+        while (k < breakpoints.length && amps >= breakpoints[k]) {
+            k++;
+        }
+        if (fastest[k] >= 0) {
+            // the minimum over the stages is this stage's time, to the last bit
+            return stages[fastest[k]].seconds(amps);
+        }
         double t = Double.POSITIVE_INFINITY;
         for (TimeCurrentCurve s : stages) {
             t = Math.min(t, s.seconds(amps));
@@ -84,6 +126,52 @@ public final class FastestOfCurve implements TimeCurrentCurve {
         return Curves.union(parts);
     }
 
+    /**
+     * For each stretch between consecutive breakpoints, the stage that is the fastest at every
+     * current of it, where one provably is. No stage's time rises with current and none has a step
+     * inside a stretch, so on {@code [b(k-1), b(k))} a stage's time is at most its time at
+     * {@code b(k-1)}, and every other stage's at least its time at the largest double below
+     * {@code b(k)}; above the last breakpoint only a time of 0 is known to be the least.
+     */
+    private static int[] fastestStages(TimeCurrentCurve[] stages, double[] breaks) {
+        int[] fastest = new int[breaks.length + 1];
+        for (int k = 0; k <= breaks.length; k++) {
+            double lo = k == 0 ? 0.0 : breaks[k - 1];
+            double hi = k == breaks.length ? Double.POSITIVE_INFINITY : Math.nextDown(breaks[k]);
+            fastest[k] = stages.length == 1 ? 0 : fastestOn(stages, lo, hi);
+        }
+        return fastest;
+    }
+
+    private static int fastestOn(TimeCurrentCurve[] stages, double lo, double hi) {
+        for (int i = 0; i < stages.length; i++) {
+            double top = stages[i].seconds(lo);
+            if (!Double.isFinite(top)) {
+                continue;
+            }
+            if (hi == Double.POSITIVE_INFINITY) {
+                if (top == 0.0) {
+                    return i;
+                }
+                continue;
+            }
+            boolean below = true;
+            for (int j = 0; j < stages.length && below; j++) {
+                below = j == i || top * (1 + DOMINANCE_MARGIN) < stages[j].seconds(hi) * (1 - DOMINANCE_MARGIN);
+            }
+            if (below) {
+                return i;
+            }
+        }
+        return -1;
+    }
+
+    // built again on reading, which checks the stages and finds the fastest stage of each stretch
+    @Serial
+    private Object readResolve() {
+        return new FastestOfCurve(label, List.of(stages));
+    }
+
     // where an inverse stage becomes faster than a definite-time stage the minimum has a kink
     private static double[] handovers(TimeCurrentCurve[] stages) {
         double[] found = new double[stages.length * stages.length];
@@ -101,7 +189,7 @@ public final class FastestOfCurve implements TimeCurrentCurve {
                 }
             }
         }
-        return java.util.Arrays.copyOf(found, n);
+        return Arrays.copyOf(found, n);
     }
 
     /** @return the stages, in the order given */
