@@ -12,8 +12,10 @@ import coordination.core.curve.TabulatedCurve;
 import coordination.core.curve.TimeCurrentCurve;
 import coordination.core.margin.CableCheck;
 import coordination.core.margin.CableCheckResult;
+import coordination.core.margin.CableChecker;
 import coordination.core.margin.GradingCheck;
 import coordination.core.margin.GradingCheckResult;
+import coordination.core.margin.GradingChecker;
 import coordination.core.margin.GradingRequirement;
 import coordination.core.margin.MarginRequirement;
 import java.util.List;
@@ -26,7 +28,10 @@ import org.openjdk.jmh.annotations.OutputTimeUnit;
 import org.openjdk.jmh.annotations.Scope;
 import org.openjdk.jmh.annotations.State;
 
-/** One cable check and grading checks of relays and of fuses, and a 10,000-point sampling check for comparison. */
+/**
+ * One cable check and grading checks of relays and of fuses, each as a record and again on a
+ * reused checker, which allocates nothing, and a 10,000-point sampling check for comparison.
+ */
 @State(Scope.Benchmark)
 @BenchmarkMode(Mode.Throughput)
 @OutputTimeUnit(TimeUnit.SECONDS)
@@ -38,6 +43,12 @@ public class CheckBenchmark {
     private final Relay incomer = new Relay("F0", List.of(
             InverseTimeStage.of(InverseTimeFamily.IEC_STANDARD_INVERSE, 600, 0.3),
             DefiniteTimeStage.definiteTime(8000, 0.5)), 1, 0.05);
+
+    private final MarginRequirement margin = MarginRequirement.seconds(0.1);
+    private final GradingRequirement relayInterval = GradingRequirement.intervalSeconds(0.3);
+    private final GradingRequirement fuseInterval = GradingRequirement.intervalSeconds(0.1);
+    private final CableChecker cableChecker = new CableChecker();
+    private final GradingChecker gradingChecker = new GradingChecker();
 
     // fuses digitised from points of our own, the same shape at two ratings (no maker's data)
     private final Fuse upstreamFuse = fuse("F400", 400);
@@ -72,6 +83,34 @@ public class CheckBenchmark {
     @Benchmark
     public GradingCheckResult fuseGradingCheck() {
         return GradingCheck.check(upstreamFuse, downstreamFuse, 1000, 3000, GradingRequirement.intervalSeconds(0.1));
+    }
+
+    /** @return the exact cable check's minimum margin, on a reused checker */
+    @Benchmark
+    public double reusedCableCheck() {
+        cableChecker.run(feeder, cable, 1500, 12000, margin, null);
+        return cableChecker.minMarginSeconds();
+    }
+
+    /** @return the exact grading check's minimum interval, on a reused checker */
+    @Benchmark
+    public double reusedGradingCheck() {
+        gradingChecker.run(incomer, feeder, 1500, 6000, relayInterval);
+        return gradingChecker.minIntervalSeconds();
+    }
+
+    /** @return the wide grading check's minimum interval, on a reused checker */
+    @Benchmark
+    public double reusedGradingCheckWide() {
+        gradingChecker.run(incomer, feeder, 1500, 12000, relayInterval);
+        return gradingChecker.minIntervalSeconds();
+    }
+
+    /** @return the fuses' grading check's minimum interval, on a reused checker */
+    @Benchmark
+    public double reusedFuseGradingCheck() {
+        gradingChecker.run(upstreamFuse, downstreamFuse, 1000, 3000, fuseInterval);
+        return gradingChecker.minIntervalSeconds();
     }
 
     /** @return the minimum margin found by sampling 10,000 log-spaced currents */
