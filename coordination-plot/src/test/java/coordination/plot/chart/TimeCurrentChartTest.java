@@ -16,6 +16,8 @@ import coordination.core.margin.CableCheck;
 import coordination.core.margin.CableCheckResult;
 import coordination.core.margin.MarginRequirement;
 import java.util.List;
+import java.util.Locale;
+import java.util.SplittableRandom;
 import org.junit.jupiter.api.Test;
 import org.knowm.xchart.XYSeries;
 
@@ -86,5 +88,21 @@ class TimeCurrentChartTest {
 
     private static org.knowm.xchart.XYChart c() {
         return chart().chart();
+    }
+
+    @Test
+    void tickValuesReadAsTheFormattersThreeDecimalsWithoutTrailingZeros() {
+        // the reference is java.util.Formatter's %.3f, trailing zeros and point stripped
+        SplittableRandom r = new SplittableRandom(31);
+        for (int n = 0; n < 20_000; n++) {
+            double v = switch (n % 4) {
+                case 0 -> Math.pow(10, r.nextDouble(-4, 7));
+                case 1 -> Math.round(Math.pow(10, r.nextDouble(-1, 6))) / 1000.0 + 0.0005;
+                case 2 -> (double) r.nextInt(0, 100_000);
+                default -> Math.pow(10, r.nextInt(-3, 7)) * r.nextInt(1, 10);
+            };
+            String expected = String.format(Locale.ROOT, "%.3f", v).replaceAll("0+$", "").replaceAll("\\.$", "");
+            assertThat(v + " s", TimeCurrentChart.trim(v), is(expected));
+        }
     }
 }
