@@ -1,7 +1,9 @@
 package coordination.samples;
 
+import coordination.core.Quantities;
 import coordination.core.cable.CableThermalLimit;
 import coordination.core.cable.ConductorMaterial;
+import coordination.core.cable.ConductorSizes;
 import coordination.core.cable.Insulation;
 import coordination.core.curve.DefiniteTimeStage;
 import coordination.core.curve.InverseTimeFamily;
@@ -9,6 +11,7 @@ import coordination.core.curve.InverseTimeStage;
 import coordination.core.curve.Relay;
 import coordination.core.margin.CableCheck;
 import coordination.core.margin.CableCheckResult;
+import coordination.core.margin.CableChecker;
 import coordination.core.margin.MarginRequirement;
 import coordination.core.study.ReportWriter;
 import coordination.plot.chart.ChartContent;
@@ -22,7 +25,8 @@ import java.util.List;
 
 /**
  * Checks the aeration blower feeder of the sample scenario from code, prints the result and its
- * JSON, and writes its chart as a PNG.
+ * JSON, finds the smallest IEC size the relay protects with a reused checker, and writes the
+ * chart as a PNG.
  */
 public final class LibraryExample {
     private LibraryExample() {
@@ -45,6 +49,19 @@ public final class LibraryExample {
         CableCheckResult result = CableCheck.check(relay, cable, 1_000, 10_000, MarginRequirement.seconds(0.1));
         System.out.println(result);
         System.out.print(ReportWriter.write(result));
+
+        // the same check over the IEC sizes, on one checker that allocates nothing from run to run
+        CableChecker checker = new CableChecker();
+        MarginRequirement margin = MarginRequirement.seconds(0.1);
+        for (double mm2 : ConductorSizes.iecSizesMm2()) {
+            CableThermalLimit candidate = CableThermalLimit.of("B5-cable", ConductorMaterial.COPPER, Insulation.XLPE,
+                    mm2, 1);
+            if (checker.run(relay, candidate, 1_000, 10_000, margin, null)) {
+                System.out.println("smallest protected size: " + Quantities.significant(mm2, 3)
+                        + " mm², minimum margin " + Quantities.significant(checker.minMarginSeconds(), 3) + " s");
+                break;
+            }
+        }
 
         TimeCurrentChart chart = new TimeCurrentChart(new ChartContent("B5 with a 25 mm² cable", 0.4, List.of(relay),
                 List.of(cable), 1_000, 10_000, List.of(result), List.of()), 800, 600);
