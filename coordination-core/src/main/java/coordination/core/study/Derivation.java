@@ -250,8 +250,9 @@ final class Derivation {
                     : "at " + Quantities.significant(x, 3) + " of its length"), share);
         };
         Study.StudyCable cable = cables.get(c.id());
+        coordination.core.margin.CableChecker checker = new coordination.core.margin.CableChecker();
         DoubleUnaryOperator margin = x -> {
-            double m = StudyReport.cableCheck(devices.get(device).referred(), cable.limit(), at.apply(x))
+            double m = StudyReport.cableCheck(devices.get(device).referred(), cable.limit(), at.apply(x), checker)
                     .minMarginSeconds();
             return Double.isNaN(m) ? Double.NEGATIVE_INFINITY : m;
         };

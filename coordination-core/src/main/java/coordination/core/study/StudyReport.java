@@ -1,9 +1,9 @@
 package coordination.core.study;
 
 import coordination.core.Quantities;
-import coordination.core.margin.CableCheck;
+import coordination.core.margin.CableChecker;
 import coordination.core.margin.CheckResult;
-import coordination.core.margin.GradingCheck;
+import coordination.core.margin.GradingChecker;
 import java.io.Serializable;
 import java.util.ArrayList;
 import java.util.List;
@@ -71,13 +71,18 @@ public record StudyReport(Study study, List<CheckResult> results, List<CheckNote
         List<CheckResult> results = new ArrayList<>();
         List<CheckNotes> notes = new ArrayList<>();
         StudyNotes noting = new StudyNotes(study);
+        // one checker of each kind for the whole study: a check run again on it is the same to the last bit
+        CableChecker cableChecker = new CableChecker();
+        GradingChecker gradingChecker = new GradingChecker();
         for (Study.StudyCheck c : study.checks()) {
             if (c instanceof Study.CableCheckSpec cc) {
-                results.add(cableCheck(study, cc));
+                results.add(cableCheck(study.device(cc.device()).referred(), study.cable(cc.cable()).limit(), cc,
+                        cableChecker));
             } else if (c instanceof Study.GradingCheckSpec g) {
-                results.add(GradingCheck.check(study.device(g.upstream()).referred().referredBy(1 / g.upstreamScale()),
+                gradingChecker.run(study.device(g.upstream()).referred().referredBy(1 / g.upstreamScale()),
                         study.device(g.downstream()).referred(), g.range().fromAmps(), g.range().toAmps(),
-                        g.requirement()));
+                        g.requirement());
+                results.add(gradingChecker.result());
             }
             notes.add(noting.of(c, results.get(results.size() - 1)));
         }
@@ -88,19 +93,9 @@ public record StudyReport(Study study, List<CheckResult> results, List<CheckNote
     }
 
     /**
-     * Runs one cable check. A check of one conductor of a parallel group compares that conductor
-     * with the device seen through the conductor's share of its current.
-     *
-     * @param study the study
-     * @param cc the check
-     * @return the result
-     */
-    static coordination.core.margin.CableCheckResult cableCheck(Study study, Study.CableCheckSpec cc) {
-        return cableCheck(study.device(cc.device()).referred(), study.cable(cc.cable()).limit(), cc);
-    }
-
-    /**
-     * Runs one cable check on a device, already referred to the study's voltage, and its cable.
+     * Runs one cable check on a device, already referred to the study's voltage, and its cable. A
+     * check of one conductor of a parallel group compares that conductor with the device seen
+     * through the conductor's share of its current.
      *
      * @param device the protecting device at the study's voltage
      * @param limit the cable's limit, all its conductors
@@ -109,14 +104,31 @@ public record StudyReport(Study study, List<CheckResult> results, List<CheckNote
      */
     static coordination.core.margin.CableCheckResult cableCheck(coordination.core.curve.ProtectiveDevice device,
             coordination.core.cable.CableThermalLimit limit, Study.CableCheckSpec cc) {
+        return cableCheck(device, limit, cc, new CableChecker());
+    }
+
+    /**
+     * Runs one cable check as {@link #cableCheck(coordination.core.curve.ProtectiveDevice,
+     * coordination.core.cable.CableThermalLimit, Study.CableCheckSpec)} does, on a checker the
+     * caller runs again.
+     *
+     * @param device the protecting device at the study's voltage
+     * @param limit the cable's limit, all its conductors
+     * @param cc the check
+     * @param checker the checker to run it on
+     * @return the result
+     */
+    static coordination.core.margin.CableCheckResult cableCheck(coordination.core.curve.ProtectiveDevice device,
+            coordination.core.cable.CableThermalLimit limit, Study.CableCheckSpec cc, CableChecker checker) {
         coordination.core.curve.ProtectiveDevice seen = device;
         coordination.core.cable.CableThermalLimit conductor = limit;
         if (cc.conductorShare() != 1.0) {
             seen = device.referredBy(cc.conductorShare());
             conductor = limit.withParallel(1);
         }
-        return new CableCheck(seen, conductor, cc.range().fromAmps(), cc.range().toAmps(), cc.requirement(),
-                cc.dcOffset().orElse(null)).result();
+        checker.run(seen, conductor, cc.range().fromAmps(), cc.range().toAmps(), cc.requirement(),
+                cc.dcOffset().orElse(null));
+        return checker.result();
     }
 
     /** A device that trips on a current the study says it must ride through does its job badly. */
