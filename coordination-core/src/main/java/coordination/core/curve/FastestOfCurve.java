@@ -65,6 +65,24 @@ public final class FastestOfCurve implements TimeCurrentCurve {
         this.fastest = Arrays.copyOf(keptFastest, n + 1);
     }
 
+    // the stretch holding a current: how many breakpoints lie at or below it
+    private int stretch(double amps) {
+        int k = 0;
+        while (k < breakpoints.length && amps >= breakpoints[k]) {
+            k++;
+        }
+        return k;
+    }
+
+    /**
+     * The stage that is the fastest at every current from one current to another, when both lie
+     * in one stretch between breakpoints (none of that stage's own is inside), or -1.
+     */
+    private int fastestThroughout(double fromAmps, double toAmps) {
+        int k = stretch(fromAmps);
+        return k == stretch(toAmps) ? fastest[k] : -1;
+    }
+
     private static boolean isBreakpointOf(TimeCurrentCurve stage, double amps) {
         for (double b : stage.breakpointsAmps()) {
             if (b == amps) {
@@ -76,10 +94,7 @@ public final class FastestOfCurve implements TimeCurrentCurve {
 
     @Override
     public double seconds(double amps) {
-        int k = 0;
-        while (k < breakpoints.length && amps >= breakpoints[k]) {
-            k++;
-        }
+        int k = stretch(amps);
         if (fastest[k] >= 0) {
             // the minimum over the stages is this stage's time, to the last bit
             return stages[fastest[k]].seconds(amps);
@@ -91,9 +106,16 @@ public final class FastestOfCurve implements TimeCurrentCurve {
         return t;
     }
 
-    /** The fastest of several curves is no steeper than the steepest of those that operate. */
+    /**
+     * On a stretch where one stage is the fastest throughout, that stage's own bound; elsewhere,
+     * the fastest of several curves is no steeper than the steepest of those that operate.
+     */
     @Override
     public double logSlopeBound(double fromAmps, double toAmps) {
+        int only = fastestThroughout(fromAmps, toAmps);
+        if (only >= 0) {
+            return stages[only].logSlopeBound(fromAmps, toAmps);
+        }
         double bound = 0.0;
         for (TimeCurrentCurve s : stages) {
             bound = Math.max(bound, s.logSlopeBound(fromAmps, toAmps));
@@ -101,9 +123,16 @@ public final class FastestOfCurve implements TimeCurrentCurve {
         return bound;
     }
 
-    /** Whichever stage is fastest falls at least as steeply as the least steep of those that operate. */
+    /**
+     * On a stretch where one stage is the fastest throughout, that stage's own floor; elsewhere,
+     * whichever stage is fastest falls at least as steeply as the least steep of those that operate.
+     */
     @Override
     public double logSlopeFloor(double fromAmps, double toAmps) {
+        int only = fastestThroughout(fromAmps, toAmps);
+        if (only >= 0) {
+            return stages[only].logSlopeFloor(fromAmps, toAmps);
+        }
         double floor = Double.POSITIVE_INFINITY;
         for (TimeCurrentCurve s : stages) {
             floor = Math.min(floor, s.logSlopeFloor(fromAmps, toAmps));
