@@ -37,7 +37,6 @@ public final class CableChecker {
     private static final double MIN_STEADY_STEP = 1e-6;
     /** Fall per scan step, relative to the values' size, that no rounding of them can undo. */
     private static final double STRICT_FALL = 1e-12;
-    private static final double[] NONE = new double[0];
 
     private final boolean plain;
     private final CurveMemory memory = new CurveMemory(null);
@@ -500,7 +499,7 @@ public final class CableChecker {
         splits.add(curve.lowestDefinedAmps());
         splits.add(curve.highestDefinedAmps());
         splits.add(letThroughFrom);
-        splits.addAll(letThrough == null ? NONE : letThroughBreaks.of(letThrough));
+        splits.addAll(letThroughBreaks.of(letThrough));
         splits.addAll(cableBreaks.of(cable));
         splits.finish();
         segments.fill(splits.points(), splits.count());

@@ -29,7 +29,6 @@ public final class GradingChecker {
     private static final double MIN_STEP = 1e-6;
     /** Fall per scan step, relative to the values' size, that no rounding of them can undo. */
     private static final double STRICT_FALL = 1e-12;
-    private static final double[] NONE = new double[0];
 
     private final boolean plain;
     private final SmoothScan scan;
@@ -422,8 +421,8 @@ public final class GradingChecker {
         splits.add(down.lowestDefinedAmps());
         splits.add(down.highestDefinedAmps());
         splits.add(downstream.letThroughFromAmps());
-        splits.addAll(preArcing == null ? NONE : preArcingBreaks.of(preArcing));
-        splits.addAll(letThrough == null ? NONE : letThroughBreaks.of(letThrough));
+        splits.addAll(preArcingBreaks.of(preArcing));
+        splits.addAll(letThroughBreaks.of(letThrough));
         splits.finish();
         segments.fill(splits.points(), splits.count());
     }

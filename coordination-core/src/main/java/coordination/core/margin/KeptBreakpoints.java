@@ -9,6 +9,8 @@ import coordination.core.curve.TimeCurrentCurve;
  * for again: they do not change, and a checker run again need not copy them.
  */
 final class KeptBreakpoints {
+    private static final double[] NONE = new double[0];
+
     private Object source;
     private double[] amps;
 
@@ -20,7 +22,11 @@ final class KeptBreakpoints {
         return amps;
     }
 
+    // a device without stated energy has no breakpoints of it
     double[] of(LetThroughEnergy e) {
+        if (e == null) {
+            return NONE;
+        }
         if (e != source) {
             source = e;
             amps = e.breakpointsAmps();
